@@ -1,10 +1,32 @@
 package org.rosetra.lang.cli;
 
-/** Entry point of the {@code rosetra} command (placeholder until the CLI lands). */
-public final class Main {
-    private Main() {}
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code rosetra} command: hands each subcommand to its own class. */
+@Command(
+        name = "rosetra",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = "Reduces strain-gauge rosette measurements written as a checked script.",
+        subcommands = {RunCommand.class, CheckCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
 
     public static void main(String[] args) {
-        System.out.println("rosetra 0.1.0");
+        System.exit(execute(args));
+    }
+
+    /** Runs the command line and returns the exit status (0 ran and passed, 1 a check failed, 2 error). */
+    public static int execute(String... args) {
+        CommandLine line = new CommandLine(new Main());
+        line.setExecutionExceptionHandler(new UserErrorHandler());
+        return line.execute(args);
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(System.out);
     }
 }
