@@ -1,7 +1,7 @@
 package org.rosetra.runtime.units;
 
 /** Two quantities, or a quantity and a unit, whose dimensions an operation needs to agree. */
-public final class DimensionMismatchException extends RuntimeException {
+public final class DimensionMismatchException extends IllegalArgumentException {
 
     private static final long serialVersionUID = 1L;
 

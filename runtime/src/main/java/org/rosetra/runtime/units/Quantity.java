@@ -15,7 +15,7 @@ public record Quantity(double si, Dimension dimension) implements Comparable<Qua
     public Quantity {
         Objects.requireNonNull(dimension, "dimension");
         if (!Double.isFinite(si)) {
-            throw new ArithmeticException("a quantity of " + dimension + " must be a finite number, got "
+            throw new QuantityException("a quantity of " + dimension + " must be a finite number, got "
                     + si + "; check the input or the operation that produced it");
         }
     }
@@ -23,7 +23,7 @@ public record Quantity(double si, Dimension dimension) implements Comparable<Qua
     /** {@code of(205, Units.GPA)} is 2.05e11 Pa; {@code of(20, Units.DEG_C)} is 293.15 K. */
     public static Quantity of(double value, Unit unit) {
         if (!Double.isFinite(value)) {
-            throw new IllegalArgumentException("the value given in " + unit + " is " + value
+            throw new QuantityException("the value given in " + unit + " is " + value
                     + "; give a finite number");
         }
         return new Quantity(unit.toSi(value), unit.dimension());
@@ -68,7 +68,7 @@ public record Quantity(double si, Dimension dimension) implements Comparable<Qua
 
     public Quantity over(Quantity other) {
         if (other.si == 0.0) {
-            throw new ArithmeticException("cannot divide a quantity of " + dimension
+            throw new QuantityException("cannot divide a quantity of " + dimension
                     + " by a zero quantity of " + other.dimension + "; the divisor must not be zero");
         }
         return new Quantity(si / other.si, dimension.over(other.dimension));
@@ -76,11 +76,11 @@ public record Quantity(double si, Dimension dimension) implements Comparable<Qua
 
     public Quantity pow(Rational power) {
         if (si < 0.0 && !power.isInteger()) {
-            throw new ArithmeticException("cannot raise the negative quantity " + si + " (" + dimension
+            throw new QuantityException("cannot raise the negative quantity " + si + " (" + dimension
                     + ") to the fractional power " + power + "; the base must not be negative");
         }
         if (si == 0.0 && power.signum() < 0) {
-            throw new ArithmeticException("cannot raise a zero quantity of " + dimension
+            throw new QuantityException("cannot raise a zero quantity of " + dimension
                     + " to the negative power " + power + "; the base must not be zero");
         }
         return new Quantity(Math.pow(si, power.doubleValue()), dimension.pow(power));

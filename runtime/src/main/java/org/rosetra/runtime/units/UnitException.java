@@ -7,7 +7,7 @@ import java.util.Optional;
  * the text (so a checker can turn it into a column) and, for an unknown symbol, the
  * nearest known one.
  */
-public final class UnitException extends RuntimeException {
+public final class UnitException extends IllegalArgumentException {
 
     private static final long serialVersionUID = 1L;
 

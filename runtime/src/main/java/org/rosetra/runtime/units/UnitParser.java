@@ -44,6 +44,7 @@ public final class UnitParser {
     }
 
     private Unit unit() {
+        int start = position;
         Unit result = factor();
         while (true) {
             skipSpaces();
@@ -63,12 +64,15 @@ public final class UnitParser {
                         + "' has nothing after it; write a unit after it, or remove it",
                         text, operatorAt, 1, null);
             }
+            Unit left = result;
             Unit right = factor();
-            result = operator == '*' ? result.times(right) : result.over(right);
+            result = withinRange(start, () -> operator == '*' ? left.times(right) : left.over(right));
         }
     }
 
     private Unit factor() {
+        skipSpaces();
+        int start = position;
         Unit base = primary();
         skipSpaces();
         if (atEnd() || peek() != '^') {
@@ -76,7 +80,19 @@ public final class UnitParser {
         }
         position++;
         skipSpaces();
-        return base.pow(exponent());
+        Rational power = exponent();
+        return withinRange(start, () -> base.pow(power));
+    }
+
+    /** A power like GPa^100 overflows a double (or an exponent an int): say so, and where. */
+    private Unit withinRange(int start, java.util.function.Supplier<Unit> combination) {
+        try {
+            return combination.get();
+        } catch (ArithmeticException | IllegalArgumentException outOfRange) {
+            String part = text.substring(start, position);
+            throw new UnitException("the unit '" + part + "' in '" + text + "' is too large or too small "
+                    + "to represent; use smaller powers", text, start, part.length(), null);
+        }
     }
 
     private Unit primary() {

@@ -70,12 +70,12 @@ class QuantityTest {
 
     @Test
     void neverProducesNaN() {
-        assertThrows(IllegalArgumentException.class, () -> Quantity.of(Double.NaN, Units.MPA));
-        assertThrows(IllegalArgumentException.class, () -> Quantity.of(Double.POSITIVE_INFINITY, Units.MPA));
-        assertThrows(ArithmeticException.class, () -> Quantity.of(1, Units.MPA).over(Quantity.of(0, Units.PA)));
-        assertThrows(ArithmeticException.class, () -> Quantity.of(-4, UnitParser.parse("mm^2")).sqrt());
-        assertThrows(ArithmeticException.class, () -> Quantity.of(0, Units.MILLIMETRE).pow(Rational.of(-1)));
-        assertThrows(ArithmeticException.class, () -> Quantity.of(1e300, Units.GPA).times(Quantity.of(1e300, Units.GPA)));
+        assertThrows(QuantityException.class, () -> Quantity.of(Double.NaN, Units.MPA));
+        assertThrows(QuantityException.class, () -> Quantity.of(Double.POSITIVE_INFINITY, Units.MPA));
+        assertThrows(QuantityException.class, () -> Quantity.of(1, Units.MPA).over(Quantity.of(0, Units.PA)));
+        assertThrows(QuantityException.class, () -> Quantity.of(-4, UnitParser.parse("mm^2")).sqrt());
+        assertThrows(QuantityException.class, () -> Quantity.of(0, Units.MILLIMETRE).pow(Rational.of(-1)));
+        assertThrows(QuantityException.class, () -> Quantity.of(1e300, Units.GPA).times(Quantity.of(1e300, Units.GPA)));
     }
 
     @Test

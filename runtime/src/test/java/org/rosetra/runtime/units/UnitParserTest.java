@@ -160,6 +160,9 @@ class UnitParserTest {
         "2*m    | 0 | 1",
         "m^(1/0) | 5 | 1",
         "m^99999999999 | 2 | 11",
+        "GPa^100       | 0 | 7",
+        "N*mm^-400     | 2 | 7",
+        "(m^2147483647)^2 | 0 | 16",
     })
     void malformedTextReportsWhere(String text, int offset, int length) {
         UnitException error = assertThrows(UnitException.class, () -> UnitParser.parse(text));
