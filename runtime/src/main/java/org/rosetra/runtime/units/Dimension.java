@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.IntFunction;
 
 /**
  * A physical dimension: exact rational exponents over the {@link BaseDimension}s.
@@ -134,7 +135,7 @@ public final class Dimension {
         return Arrays.hashCode(exponents);
     }
 
-    private Dimension combine(java.util.function.IntFunction<Rational> exponentOf) {
+    private Dimension combine(IntFunction<Rational> exponentOf) {
         Rational[] result = new Rational[BASES.length];
         for (int i = 0; i < result.length; i++) {
             result[i] = exponentOf.apply(i);

@@ -1,6 +1,7 @@
 package org.rosetra.runtime.units;
 
 import java.util.Collection;
+import java.util.Locale;
 import java.util.Optional;
 
 /**
@@ -22,8 +23,8 @@ final class NearestSymbol {
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
         for (String candidate : known) {
-            int distance = editDistance(written.toLowerCase(java.util.Locale.ROOT),
-                    candidate.toLowerCase(java.util.Locale.ROOT));
+            int distance = editDistance(written.toLowerCase(Locale.ROOT),
+                    candidate.toLowerCase(Locale.ROOT));
             if (distance < bestDistance) {
                 best = candidate;
                 bestDistance = distance;

@@ -29,6 +29,14 @@ public record Quantity(double si, Dimension dimension) implements Comparable<Qua
         return new Quantity(unit.toSi(value), unit.dimension());
     }
 
+    /**
+     * A difference or step of {@code value} in {@code unit}: the unit's offset is ignored, so
+     * a rise of 10 degC is 10 K (while {@code of(10, DEG_C)} is the temperature 283.15 K).
+     */
+    public static Quantity ofDifference(double value, Unit unit) {
+        return of(value, unit.asDifference());
+    }
+
     /** A plain number. */
     public static Quantity number(double value) {
         return of(value, Unit.ONE);
@@ -38,6 +46,11 @@ public record Quantity(double si, Dimension dimension) implements Comparable<Qua
     public double in(Unit unit) {
         requireSame("express a quantity of " + dimension + " in " + unit, unit.dimension());
         return unit.fromSi(si);
+    }
+
+    /** This value read as a difference in {@code unit}, ignoring its offset (a rise of 18 K is 18 degC). */
+    public double differenceIn(Unit unit) {
+        return in(unit.asDifference());
     }
 
     public Quantity plus(Quantity other) {

@@ -1,5 +1,6 @@
 package org.rosetra.runtime.units;
 
+import java.util.function.Supplier;
 import org.apache.commons.math3.exception.MathArithmeticException;
 import org.apache.commons.math3.fraction.Fraction;
 
@@ -94,7 +95,7 @@ public record Rational(int numerator, int denominator) implements Comparable<Rat
     }
 
     /** Commons Math signals int overflow with its own exception; ours says what to do. */
-    private static Fraction exact(java.util.function.Supplier<Fraction> computation) {
+    private static Fraction exact(Supplier<Fraction> computation) {
         try {
             return computation.get();
         } catch (MathArithmeticException overflow) {

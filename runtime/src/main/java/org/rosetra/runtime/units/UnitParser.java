@@ -1,5 +1,7 @@
 package org.rosetra.runtime.units;
 
+import java.util.function.Supplier;
+
 /**
  * Reads a unit expression such as {@code N/mm^2}, {@code kN*m} or {@code ue/degC}.
  * <pre>
@@ -13,6 +15,8 @@ package org.rosetra.runtime.units;
  * any compound it is a temperature difference (see {@link Unit}).
  */
 public final class UnitParser {
+
+    private static final String SUPERSCRIPTS = "\u2070\u00B9\u00B2\u00B3\u2074\u2075\u2076\u2077\u2078\u2079\u207B";
 
     private final String text;
     private int position;
@@ -85,7 +89,7 @@ public final class UnitParser {
     }
 
     /** A power like GPa^100 overflows a double (or an exponent an int): say so, and where. */
-    private Unit withinRange(int start, java.util.function.Supplier<Unit> combination) {
+    private Unit withinRange(int start, Supplier<Unit> combination) {
         try {
             return combination.get();
         } catch (ArithmeticException | IllegalArgumentException outOfRange) {
@@ -126,7 +130,7 @@ public final class UnitParser {
             if (digits.equals("1")) {
                 return Unit.ONE;
             }
-            String hint = start > 0 && text.charAt(start - 1) == '/'
+            String hint = followsIntegerPower(start)
                     ? "; write a fractional power in parentheses, like m^(1/2)"
                     : "; only '1' may stand in a unit, as in 1/s";
             throw new UnitException("the number '" + digits + "' cannot stand in the unit '" + text
@@ -144,6 +148,11 @@ public final class UnitParser {
                 "unknown unit '" + symbol + "' in '" + text + "'; write one of the known units "
                         + "(such as MPa, ue, deg, degC, mm, kN)",
                 text, start, symbol.length(), NearestSymbol.to(symbol, Units.symbols()).orElse(null)));
+    }
+
+    /** True at the '2' of "m^1/2", which was probably meant as a fractional power. */
+    private boolean followsIntegerPower(int index) {
+        return text.substring(0, index).matches("(?s).*\\^\\s*-?\\d+\\s*/\\s*");
     }
 
     private Rational exponent() {
@@ -199,8 +208,19 @@ public final class UnitParser {
             return new UnitException(expectation + ", but the unit '" + text + "' ends there",
                     text, text.length(), 0, null);
         }
-        return new UnitException(expectation + ", found '" + peek() + "' in the unit '" + text + "'",
-                text, position, 1, null);
+        return new UnitException(expectation + ", found '" + peek() + "' in the unit '" + text + "'"
+                + hintFor(peek()), text, position, 1, null);
+    }
+
+    /** The two characters people paste from documents: superscript powers and the degree sign. */
+    private static String hintFor(char found) {
+        if (SUPERSCRIPTS.indexOf(found) >= 0) {
+            return "; write powers with '^', like mm^2 or s^-1";
+        }
+        if (found == '\u00B0') {
+            return "; write degC for \u00B0C, degF for \u00B0F and deg for an angle in degrees";
+        }
+        return "";
     }
 
     private void skipSpaces() {

@@ -86,4 +86,13 @@ class QuantityTest {
         assertEquals(412e-6, strain.si(), 1e-18);
         assertEquals(41.2e-3, strain.in(Units.PERCENT), 1e-15);
     }
+
+    @Test
+    void temperatureDifferencesIgnoreTheOffset() {
+        // NIST SP 811 (2008) 4.2.1.1 and B.9: an interval of 1 degC = 1 K, of 1 degF = 5/9 K
+        assertEquals(10.0, Quantity.ofDifference(10, Units.DEG_C).si(), 1e-12);
+        assertEquals(10.0 / 1.8, Quantity.ofDifference(10, Units.DEG_F).si(), 1e-12);
+        assertEquals(18.0 * 1.8, Quantity.ofDifference(18, Units.KELVIN).differenceIn(Units.DEG_F), 1e-12);
+        assertEquals(283.15, Quantity.of(10, Units.DEG_C).si(), 1e-12);
+    }
 }

@@ -184,4 +184,20 @@ class UnitParserTest {
         UnitException error = assertThrows(UnitException.class, () -> UnitParser.parse("m^1/2"));
         assertTrue(error.getMessage().contains("m^(1/2)"), error.getMessage());
     }
+
+    @Test
+    void pastedSuperscriptsAndDegreeSignsAreExplained() {
+        UnitException squared = assertThrows(UnitException.class, () -> UnitParser.parse("N/mm\u00B2"));
+        assertEquals(4, squared.offset());
+        assertTrue(squared.getMessage().contains("mm^2"), squared.getMessage());
+        UnitException degree = assertThrows(UnitException.class, () -> UnitParser.parse("\u00B0C"));
+        assertEquals(0, degree.offset());
+        assertTrue(degree.getMessage().contains("degC"), degree.getMessage());
+    }
+
+    @Test
+    void aNumberAfterAPlainDivisionIsNotTakenForAPower() {
+        UnitException error = assertThrows(UnitException.class, () -> UnitParser.parse("N/2"));
+        assertFalse(error.getMessage().contains("fractional"), error.getMessage());
+    }
 }
