@@ -7,6 +7,9 @@ import org.junit.jupiter.api.Test;
 
 class DisplayUnitsTest {
 
+    // The presets are project choices (the brief for this package), not computations;
+    // only the scales checked below are numbers with an outside source.
+
     @Test
     void siPreset() {
         DisplayUnits si = DisplayUnits.si();

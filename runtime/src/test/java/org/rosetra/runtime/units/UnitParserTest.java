@@ -72,7 +72,8 @@ class UnitParserTest {
 
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
-        // SI definitions, NIST SP 811 (2008) Tables 3 and 5
+        // SI definitions, NIST SP 811 (2008) Tables 3 and 5; in, lbf, kip from its Appendix B.8 (exact);
+        // kip*in = 4448.2216152605 * 0.0254 N*m; mm^(1/2) = sqrt(1e-3) m^(1/2) (from memory: 0.0316227766...)
         "s^-1         | frequency    | 1",
         "1/s          | frequency    | 1",
         "m/s^2        | acceleration | 1",
