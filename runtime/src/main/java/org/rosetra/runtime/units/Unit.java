@@ -71,6 +71,9 @@ public record Unit(String symbol, Dimension dimension, double scale, double offs
     }
 
     public Unit pow(Rational power) {
+        if (symbol.isEmpty()) {
+            return linear("", dimension.pow(power), Math.pow(scale, power.doubleValue()));
+        }
         String base = isCompound(symbol) ? "(" + symbol + ")" : symbol;
         String exponent = power.isInteger() ? power.toString() : "(" + power + ")";
         return linear(base + "^" + exponent, dimension.pow(power),

@@ -92,6 +92,7 @@ class UnitParserTest {
         "N * mm       | moment       | 1e-3",
         "m^0          | none         | 1",
         "%            | none         | 0.01",
+        "1^2/s        | frequency    | 1",
     })
     void compoundUnits(String text, String dimension, double scale) {
         Unit unit = UnitParser.parse(text);
