@@ -54,7 +54,7 @@ public record StrainState(double epsX, double epsY, double gammaXY) {
 
     /** In-plane maximum engineering shear strain, eps1 - eps2 (never negative). */
     public double maxShear() {
-        return 2 * Math.hypot(0.5 * (epsX - epsY), 0.5 * gammaXY);
+        return 2 * PrincipalDirection.radius(epsX, epsY, 0.5 * gammaXY);
     }
 
     /** Mohr's circle of strain; the shear ordinate is half the engineering shear strain. */
