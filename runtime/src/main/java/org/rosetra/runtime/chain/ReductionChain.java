@@ -166,14 +166,7 @@ public final class ReductionChain {
         }
         double[][] corrected = buffers.correctedColumns();
         for (int k = 0; k < arms.length; k++) {
-            double[] column = corrected[k];
-            arms[k].correct(indicated[k], temperatureCOrNull, column, n);
-            if (zero != null) {
-                final double z = zero[k];
-                for (int i = 0; i < n; i++) {
-                    column[i] -= z;
-                }
-            }
+            arms[k].correct(indicated[k], temperatureCOrNull, zero == null ? 0.0 : zero[k], corrected[k], n);
         }
         solver.solve(corrected, n, buffers.epsX(), buffers.epsY(), buffers.gammaXY(), buffers.residualRms());
         if (!buffers.memberColumns().isEmpty()) {

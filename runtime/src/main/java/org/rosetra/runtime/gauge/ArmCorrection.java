@@ -108,8 +108,33 @@ public final class ArmCorrection {
      * given, {@code temperatureCOrNull[i]} in degC. Allocates nothing; {@code out} may be {@code in}.
      */
     public void correct(double[] in, double[] temperatureCOrNull, double[] out, int n) {
+        correct(in, temperatureCOrNull, 0.0, out, n);
+    }
+
+    /**
+     * Steps 1 to 3 over a column: as {@link #correct(double[], double[], double[], int)}, less
+     * {@code correctedZero}, this arm's zero reading already corrected by steps 1 and 2 (a
+     * baseline's, or the mean over a zero window). One pass; allocates nothing.
+     */
+    public void correct(double[] in, double[] temperatureCOrNull, double correctedZero, double[] out, int n) {
         requireColumns(in, temperatureCOrNull, out, n);
+        if (!Double.isFinite(correctedZero)) {
+            throw new GaugeException("corrected zero reading must be a finite strain, got " + correctedZero
+                    + "; check the baseline or the zero window of this arm");
+        }
         final boolean thermal = temperatureCOrNull != null && thermalAtFactor.length > 0;
+        if (temperatureCOrNull != null && !thermal) {
+            // No polynomial: the temperature changes nothing, but a bad one is still a bad input.
+            for (int i = 0; i < n; i++) {
+                double t = temperatureCOrNull[i];
+                if (!(t >= ABSOLUTE_ZERO_C) || !(t <= Double.MAX_VALUE)) {
+                    requireTemperature(t, i);
+                }
+            }
+        }
+        final double z = correctedZero;
+        final double[] a = thermalAtFactor;
+        final int last = a.length - 1;
         if (bridge == Bridge.NONE) {
             final double s = noneScale;
             for (int i = 0; i < n; i++) {
@@ -117,7 +142,11 @@ public final class ArmCorrection {
                 if (!(Math.abs(x) <= Double.MAX_VALUE)) {
                     requireFiniteReading(x, i);
                 }
-                out[i] = x * s;
+                double e = x * s;
+                if (thermal) {
+                    e -= thermalAt(a, last, temperatureCOrNull[i], i);
+                }
+                out[i] = e - z; // same order as the scalar path: corrected, then less the zero
             }
         } else {
             final double v = vrScale;
@@ -130,32 +159,25 @@ public final class ArmCorrection {
                     requireFiniteReading(x, i);
                     requirePhysicalBridge(vr, x, i);
                 }
-                out[i] = q * vr / (1.0 - 2.0 * vr);
+                double e = q * vr / (1.0 - 2.0 * vr);
+                if (thermal) {
+                    e -= thermalAt(a, last, temperatureCOrNull[i], i);
+                }
+                out[i] = e - z; // same order as the scalar path: corrected, then less the zero
             }
         }
-        if (thermal) {
-            final double[] a = thermalAtFactor;
-            final int last = a.length - 1;
-            for (int i = 0; i < n; i++) {
-                double t = temperatureCOrNull[i];
-                if (!(t >= ABSOLUTE_ZERO_C) || !(t <= Double.MAX_VALUE)) {
-                    requireTemperature(t, i);
-                }
-                double to = a[last];
-                for (int k = last - 1; k >= 0; k--) {
-                    to = to * t + a[k];
-                }
-                out[i] -= to;
-            }
-        } else if (temperatureCOrNull != null) {
-            // No polynomial: the temperature changes nothing, but a bad one is still a bad input.
-            for (int i = 0; i < n; i++) {
-                double t = temperatureCOrNull[i];
-                if (!(t >= ABSOLUTE_ZERO_C) || !(t <= Double.MAX_VALUE)) {
-                    requireTemperature(t, i);
-                }
-            }
+    }
+
+    /** TO(t) at the gauge's factor, Horner; checks the temperature of sample i. */
+    private static double thermalAt(double[] a, int last, double t, int i) {
+        if (!(t >= ABSOLUTE_ZERO_C) || !(t <= Double.MAX_VALUE)) {
+            requireTemperature(t, i);
         }
+        double to = a[last];
+        for (int k = last - 1; k >= 0; k--) {
+            to = to * t + a[k];
+        }
+        return to;
     }
 
     /** Steps 1 and 2 with each value kept for the calculation record. */

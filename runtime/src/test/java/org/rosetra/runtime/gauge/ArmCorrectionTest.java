@@ -117,12 +117,16 @@ class ArmCorrectionTest {
             }
             double[] out = new double[n];
             double[] outNoTemp = new double[n];
+            double[] outZero = new double[n];
             arm.correct(in, temp, out, n);
             arm.correct(in, null, outNoTemp, n);
+            arm.correct(in, temp, 12.5 * UE, outZero, n);
             for (int i = 0; i < n; i++) {
                 assertEquals(arm.correct(in[i], temp[i]), out[i], 1e-20, "sample " + i);
                 assertEquals(arm.correct(in[i]), outNoTemp[i], 1e-20, "sample " + i);
                 assertEquals(arm.trace(in[i], temp[i]).corrected(), out[i], 1e-20);
+                // Step 3 (LANGUAGE.md): less the arm's corrected zero reading.
+                assertEquals(arm.trace(in[i], temp[i]).withBaseline(12.5 * UE).result(), outZero[i], 0);
             }
         }
     }
