@@ -140,21 +140,23 @@ public final class ReductionChain {
     }
 
     /**
+     * Steps 1 and 2 only, into {@code buffers.corrected(k)}: for a zero window, whose per-arm
+     * mean of corrected readings then goes to {@link #withZero}. Ignores this chain's zero.
+     */
+    public void correctOnly(double[][] indicated, double[] temperatureCOrNull, int n, ChainBuffers buffers) {
+        requireChunk(indicated, n, buffers);
+        double[][] corrected = buffers.correctedColumns();
+        for (int k = 0; k < arms.length; k++) {
+            arms[k].correct(indicated[k], temperatureCOrNull, corrected[k], n);
+        }
+    }
+
+    /**
      * Steps 1 to 4 and the result members over {@code n} samples: {@code indicated[k][i]} is
      * arm k's indication at sample i, {@code temperatureCOrNull[i]} its temperature in degC.
      */
     public void run(double[][] indicated, double[] temperatureCOrNull, int n, ChainBuffers buffers) {
-        if (buffers == null || buffers.armCount() != arms.length) {
-            throw new ChainException("buffers must be made for this chain's " + arms.length + " arms");
-        }
-        if (n < 0 || n > buffers.capacity()) {
-            throw new ChainException("chunk of " + n + " samples does not fit buffers of " + buffers.capacity()
-                    + "; make the buffers as large as the largest chunk");
-        }
-        if (indicated == null || indicated.length != arms.length) {
-            throw new ChainException("give one reading column per arm (" + arms.length + "), got "
-                    + (indicated == null ? 0 : indicated.length));
-        }
+        requireChunk(indicated, n, buffers);
         if (material == null) {
             // Without a material the stress columns would keep stale values: refuse instead.
             for (RosetteMember m : MEMBERS) {
@@ -172,6 +174,20 @@ public final class ReductionChain {
         if (!buffers.memberColumns().isEmpty()) {
             ResultColumns.compute(buffers.epsX(), buffers.epsY(), buffers.gammaXY(), n, material, condition,
                     buffers.memberColumns());
+        }
+    }
+
+    private void requireChunk(double[][] indicated, int n, ChainBuffers buffers) {
+        if (buffers == null || buffers.armCount() != arms.length) {
+            throw new ChainException("buffers must be made for this chain's " + arms.length + " arms");
+        }
+        if (n < 0 || n > buffers.capacity()) {
+            throw new ChainException("chunk of " + n + " samples does not fit buffers of " + buffers.capacity()
+                    + "; make the buffers as large as the largest chunk");
+        }
+        if (indicated == null || indicated.length != arms.length) {
+            throw new ChainException("give one reading column per arm (" + arms.length + "), got "
+                    + (indicated == null ? 0 : indicated.length));
         }
     }
 }

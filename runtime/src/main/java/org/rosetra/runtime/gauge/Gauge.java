@@ -19,16 +19,19 @@ public record Gauge(double factor, double transverse, double nu0, double resista
     public static final double DEFAULT_NU0 = 0.285;
     public static final double DEFAULT_RESISTANCE_OHM = 120.0;
     public static final double DEFAULT_THERMAL_FACTOR = 2.00;
+    /** Largest transverse sensitivity accepted, as a fraction (20 %). */
+    public static final double MAX_TRANSVERSE = 0.2;
 
     public Gauge {
         if (!(factor > 0) || !Double.isFinite(factor)) {
             throw new GaugeException("gauge factor must be a positive finite number, got " + factor
                     + "; give the factor from the gauge's data sheet (typically about 2)");
         }
-        // |Kt| >= 1 would make the gauge as sensitive across as along: not a gauge.
-        if (!(Math.abs(transverse) < 1)) {
-            throw new GaugeException("transverse sensitivity must be a fraction between -1 and 1, got "
-                    + transverse + "; give it as a fraction or in %, e.g. 0.6 % for 0.006");
+        // Data sheets give a few percent at most; a larger value is almost always a percentage
+        // typed as a fraction (0.6 for 0.6 %), which would silently skew every strain.
+        if (!(Math.abs(transverse) <= MAX_TRANSVERSE)) {
+            throw new GaugeException("transverse sensitivity must be a fraction within +-" + MAX_TRANSVERSE
+                    + ", got " + transverse + "; give it in % or as a fraction, e.g. 0.6 % (0.006)");
         }
         if (!(nu0 > -1 && nu0 < 0.5)) {
             throw new GaugeException("nu0 (Poisson's ratio of the calibration beam) must lie in (-1, 0.5), got "

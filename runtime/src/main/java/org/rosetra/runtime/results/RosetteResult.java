@@ -1,6 +1,7 @@
 package org.rosetra.runtime.results;
 
 import java.util.EnumMap;
+import java.util.EnumSet;
 import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
@@ -18,16 +19,17 @@ import org.rosetra.runtime.stress.StressState;
  * Every member of "Results of a rosette" (LANGUAGE.md) for one strain state: the scalar path,
  * built from the state records, Hooke's law and the criteria. {@link ResultColumns} computes
  * the same over columns; tests hold the two together. Without a material only the strain
- * members other than {@code eps_z} exist. Angles in radians, stresses in Pa.
+ * members other than {@code eps_z} exist (or, for a state given by its stresses, only the
+ * stress members). Angles in radians, stresses in Pa.
  */
 public final class RosetteResult {
 
     private final double[] values;
-    private final boolean withMaterial;
+    private final EnumSet<RosetteMember> present;
 
-    private RosetteResult(double[] values, boolean withMaterial) {
+    private RosetteResult(double[] values, EnumSet<RosetteMember> present) {
         this.values = values;
-        this.withMaterial = withMaterial;
+        this.present = present;
     }
 
     /**
@@ -37,48 +39,102 @@ public final class RosetteResult {
     public static RosetteResult of(StrainState strain, Material material, PlaneCondition condition) {
         Objects.requireNonNull(strain, "strain");
         double[] v = new double[RosetteMember.values().length];
-        PrincipalStrains pe = strain.principal();
-        v[RosetteMember.EPS_X.ordinal()] = strain.epsX();
-        v[RosetteMember.EPS_Y.ordinal()] = strain.epsY();
-        v[RosetteMember.GAMMA_XY.ordinal()] = strain.gammaXY();
-        v[RosetteMember.EPS_1.ordinal()] = pe.eps1();
-        v[RosetteMember.EPS_2.ordinal()] = pe.eps2();
-        v[RosetteMember.THETA_P.ordinal()] = pe.theta1();
-        v[RosetteMember.GAMMA_MAX.ordinal()] = pe.maxShear();
+        EnumSet<RosetteMember> present = EnumSet.noneOf(RosetteMember.class);
+        putStrains(v, present, strain);
         if (material == null) {
-            return new RosetteResult(v, false);
+            return new RosetteResult(v, present);
         }
+        requireCondition(material, condition);
+        StressState stress = Hooke.stress(strain, material, condition);
+        put(v, present, RosetteMember.EPS_Z, Hooke.outOfPlaneStrain(strain, material, condition));
+        putStresses(v, present, stress, Hooke.outOfPlaneStress(stress, material, condition));
+        return new RosetteResult(v, present);
+    }
+
+    /**
+     * The result of a state given by its stresses (a {@code stress} block of LANGUAGE.md). The
+     * stress members come from {@code stress} itself; with a material the strains follow from
+     * Hooke's law for {@code condition}. Without one ({@code material == null}) only the stress
+     * members exist, and in plane strain not even sigma_z and what depends on it (tau_abs,
+     * von_mises, tresca), since sigma_z needs Poisson's ratio.
+     */
+    public static RosetteResult ofStress(StressState stress, Material material, PlaneCondition condition) {
+        Objects.requireNonNull(stress, "stress");
+        if (condition == null) {
+            throw new ResultException("a state given by its stresses needs a plane condition;"
+                    + " give state = plane_stress or plane_strain");
+        }
+        double[] v = new double[RosetteMember.values().length];
+        EnumSet<RosetteMember> present = EnumSet.noneOf(RosetteMember.class);
+        if (material == null) {
+            if (condition == PlaneCondition.PLANE_STRESS) {
+                putStresses(v, present, stress, 0.0);
+            } else {
+                PrincipalStresses ps = stress.principal();
+                put(v, present, RosetteMember.SIGMA_X, stress.sigmaX());
+                put(v, present, RosetteMember.SIGMA_Y, stress.sigmaY());
+                put(v, present, RosetteMember.TAU_XY, stress.tauXY());
+                put(v, present, RosetteMember.SIGMA_1, ps.sigma1());
+                put(v, present, RosetteMember.SIGMA_2, ps.sigma2());
+                put(v, present, RosetteMember.TAU_MAX, ps.maxShear());
+            }
+            return new RosetteResult(v, present);
+        }
+        StrainState strain = Hooke.strain(stress, material, condition);
+        putStrains(v, present, strain);
+        put(v, present, RosetteMember.EPS_Z, Hooke.outOfPlaneStrain(strain, material, condition));
+        putStresses(v, present, stress, Hooke.outOfPlaneStress(stress, material, condition));
+        return new RosetteResult(v, present);
+    }
+
+    private static void putStrains(double[] v, EnumSet<RosetteMember> present, StrainState strain) {
+        PrincipalStrains pe = strain.principal();
+        put(v, present, RosetteMember.EPS_X, strain.epsX());
+        put(v, present, RosetteMember.EPS_Y, strain.epsY());
+        put(v, present, RosetteMember.GAMMA_XY, strain.gammaXY());
+        put(v, present, RosetteMember.EPS_1, pe.eps1());
+        put(v, present, RosetteMember.EPS_2, pe.eps2());
+        put(v, present, RosetteMember.THETA_P, pe.theta1());
+        put(v, present, RosetteMember.GAMMA_MAX, pe.maxShear());
+    }
+
+    private static void putStresses(double[] v, EnumSet<RosetteMember> present, StressState stress,
+                                    double sigmaZ) {
+        PrincipalStresses ps = stress.principal();
+        put(v, present, RosetteMember.SIGMA_X, stress.sigmaX());
+        put(v, present, RosetteMember.SIGMA_Y, stress.sigmaY());
+        put(v, present, RosetteMember.TAU_XY, stress.tauXY());
+        put(v, present, RosetteMember.SIGMA_1, ps.sigma1());
+        put(v, present, RosetteMember.SIGMA_2, ps.sigma2());
+        put(v, present, RosetteMember.SIGMA_Z, sigmaZ);
+        put(v, present, RosetteMember.TAU_MAX, ps.maxShear());
+        put(v, present, RosetteMember.TAU_ABS, 0.5 * Tresca.equivalent(ps.sigma1(), ps.sigma2(), sigmaZ));
+        put(v, present, RosetteMember.VON_MISES, VonMises.equivalent(ps.sigma1(), ps.sigma2(), sigmaZ));
+        put(v, present, RosetteMember.TRESCA, Tresca.equivalent(ps.sigma1(), ps.sigma2(), sigmaZ));
+    }
+
+    private static void put(double[] v, EnumSet<RosetteMember> present, RosetteMember m, double value) {
+        v[m.ordinal()] = value;
+        present.add(m);
+    }
+
+    private static void requireCondition(Material material, PlaneCondition condition) {
         if (condition == null) {
             throw new ResultException("a rosette with material " + material.name()
                     + " needs a plane condition; give state = plane_stress or plane_strain");
         }
-        StressState stress = Hooke.stress(strain, material, condition);
-        PrincipalStresses ps = stress.principal();
-        double sigmaZ = Hooke.outOfPlaneStress(stress, material, condition);
-        v[RosetteMember.EPS_Z.ordinal()] = Hooke.outOfPlaneStrain(strain, material, condition);
-        v[RosetteMember.SIGMA_X.ordinal()] = stress.sigmaX();
-        v[RosetteMember.SIGMA_Y.ordinal()] = stress.sigmaY();
-        v[RosetteMember.TAU_XY.ordinal()] = stress.tauXY();
-        v[RosetteMember.SIGMA_1.ordinal()] = ps.sigma1();
-        v[RosetteMember.SIGMA_2.ordinal()] = ps.sigma2();
-        v[RosetteMember.SIGMA_Z.ordinal()] = sigmaZ;
-        v[RosetteMember.TAU_MAX.ordinal()] = ps.maxShear();
-        v[RosetteMember.TAU_ABS.ordinal()] = 0.5 * Tresca.equivalent(ps.sigma1(), ps.sigma2(), sigmaZ);
-        v[RosetteMember.VON_MISES.ordinal()] = VonMises.equivalent(ps.sigma1(), ps.sigma2(), sigmaZ);
-        v[RosetteMember.TRESCA.ordinal()] = Tresca.equivalent(ps.sigma1(), ps.sigma2(), sigmaZ);
-        return new RosetteResult(v, true);
     }
 
-    /** Whether {@code member} exists here (members that need a material exist only with one). */
+    /** Whether {@code member} exists here (see the factories for which exist without a material). */
     public boolean has(RosetteMember member) {
-        return withMaterial || !member.needsMaterial();
+        return present.contains(member);
     }
 
     /** The value of {@code member}; an error when it needs a material this result lacks. */
     public double get(RosetteMember member) {
         if (!has(member)) {
             throw new ResultException(member.scriptName() + " needs a material (Young's modulus and"
-                    + " Poisson's ratio); give the rosette or state material = ...");
+                    + " Poisson's ratio) here; give the rosette or state material = ...");
         }
         return values[member.ordinal()];
     }
@@ -91,10 +147,8 @@ public final class RosetteResult {
     /** Every member that exists here, in the table's order. */
     public Map<RosetteMember, Double> asMap() {
         Map<RosetteMember, Double> map = new EnumMap<>(RosetteMember.class);
-        for (RosetteMember m : RosetteMember.values()) {
-            if (has(m)) {
-                map.put(m, values[m.ordinal()]);
-            }
+        for (RosetteMember m : present) {
+            map.put(m, values[m.ordinal()]);
         }
         return map;
     }

@@ -1,5 +1,6 @@
 package org.rosetra.runtime.bench;
 
+import java.lang.management.ManagementFactory;
 import java.util.Arrays;
 import java.util.EnumSet;
 import java.util.Locale;
@@ -75,18 +76,30 @@ public final class ChainBenchmark {
             sink += runOnce(chain, buffers, arms, temperature, samples, chunk);
         }
         double[] rates = new double[runs];
+        long allocatedBefore = allocatedBytes();
         for (int r = 0; r < runs; r++) {
             long start = System.nanoTime();
             sink += runOnce(chain, buffers, arms, temperature, samples, chunk);
             long elapsed = System.nanoTime() - start;
             rates[r] = samples / (elapsed * 1e-9);
         }
+        long allocated = allocatedBytes() - allocatedBefore;
+        long chunks = runs * ((samples + chunk - 1) / chunk);
         double[] sorted = rates.clone();
         Arrays.sort(sorted);
         double median = sorted[runs / 2];
         System.out.printf(Locale.ROOT, "%-16s median %8.2f M samples/s per core  (min %.2f, max %.2f;"
-                + " %.1f ns/sample)  [check %.6e]%n", label, median / 1e6, sorted[0] / 1e6, sorted[runs - 1] / 1e6,
-                1e9 / median, sink);
+                + " %.1f ns/sample; %s bytes allocated per chunk)  [check %.6e]%n", label, median / 1e6,
+                sorted[0] / 1e6, sorted[runs - 1] / 1e6, 1e9 / median,
+                allocated < 0 ? "?" : String.format(Locale.ROOT, "%.0f", allocated / (double) chunks), sink);
+    }
+
+    /** Bytes this thread has allocated so far, or -1 where the JVM cannot say. */
+    private static long allocatedBytes() {
+        if (ManagementFactory.getThreadMXBean() instanceof com.sun.management.ThreadMXBean bean) {
+            return bean.getThreadAllocatedBytes(Thread.currentThread().getId());
+        }
+        return -1;
     }
 
     /** One pass over {@code samples}; returns a checksum so the work cannot be optimized away. */

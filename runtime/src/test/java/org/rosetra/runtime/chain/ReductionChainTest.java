@@ -115,6 +115,44 @@ class ReductionChainTest {
     }
 
     @Test
+    void zeroWindowMeanIsSubtractedFromEverySample() {
+        // Thin-walled cylinder again (handbook: hoop p r / t, axial p r / (2 t)), zeroed by the mean
+        // of an unloaded window read at varying temperature (LANGUAGE.md, series zero).
+        double hoop = 1.8 * MPA * 0.25 / 0.006;
+        double axial = hoop / 2;
+        StrainState s = strainsOf(axial, hoop, 0, STEEL);
+        Gauge gauge = Gauge.withFactor(2.09).withTransverse(0.006).withResistance(350)
+                .withThermal(-21.5 * UE, 2.10 * UE, -0.0430 * UE, 0.000155 * UE);
+        RosetteLayout layout = RosetteLayout.rectangular();
+        double rotation = Math.toRadians(-40);
+        double[] offsets = {-12 * UE, 9 * UE, 4 * UE}; // invented installation zero offsets
+        ReductionChain chain = ReductionChain.of(gauge, Bridge.QUARTER_3WIRE, 1.1, 2.00, layout, rotation, STEEL,
+                PlaneCondition.PLANE_STRESS);
+        int window = 8;
+        double[][] unloaded = new double[window][];
+        double[] temps = new double[window];
+        for (int i = 0; i < window; i++) {
+            temps[i] = 18 + i;
+            unloaded[i] = indications(StrainState.ZERO, layout, rotation, gauge, Bridge.QUARTER_3WIRE, 1.1, 2.00,
+                    temps[i], offsets);
+        }
+        ChainBuffers buffers = chain.buffers(window, STRESSES, false);
+        chain.correctOnly(columnsOf(unloaded), temps, window, buffers);
+        double[] mean = new double[3];
+        for (int k = 0; k < 3; k++) {
+            for (int i = 0; i < window; i++) {
+                mean[k] += buffers.corrected(k)[i] / window;
+            }
+        }
+        ReductionChain zeroed = chain.withZero(mean);
+        double[] loaded = indications(s, layout, rotation, gauge, Bridge.QUARTER_3WIRE, 1.1, 2.00, 40.0, offsets);
+        zeroed.run(columnsOf(loaded, loaded), new double[] {40.0, 40.0}, 2, buffers);
+        assertEquals(axial, buffers.member(RosetteMember.SIGMA_X)[1], 1e-9 * hoop);
+        assertEquals(hoop, buffers.member(RosetteMember.SIGMA_Y)[1], 1e-9 * hoop);
+        assertEquals(0, buffers.member(RosetteMember.TAU_XY)[1], 1e-9 * hoop);
+    }
+
+    @Test
     void solidShaftInBendingAndTorsion() {
         // Handbook closed form (solid circular shaft): bending 32 M / (pi d^3), torsion 16 T / (pi d^3).
         double d = 0.040;

@@ -35,6 +35,10 @@ class GaugeTest {
         assertTrue(f.getMessage().contains("gauge factor") && f.getMessage().contains("0.0"), f.getMessage());
         assertThrows(GaugeException.class, () -> Gauge.withFactor(Double.NaN));
         assertThrows(GaugeException.class, () -> Gauge.withFactor(2).withTransverse(1.2));
+        // 0.6 typed for 0.6 %: refused rather than taken as Kt = 60 %.
+        GaugeException percent = assertThrows(GaugeException.class, () -> Gauge.withFactor(2).withTransverse(0.6));
+        assertTrue(percent.getMessage().contains("0.006"), percent.getMessage());
+        assertEquals(-0.012, Gauge.withFactor(2).withTransverse(-0.012).transverse());
         assertThrows(GaugeException.class, () -> Gauge.withFactor(2).withTransverse(Double.NaN));
         assertThrows(GaugeException.class, () -> Gauge.withFactor(2).withNu0(0.5));
         assertThrows(GaugeException.class, () -> Gauge.withFactor(2).withResistance(-120));

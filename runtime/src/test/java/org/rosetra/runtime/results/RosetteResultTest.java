@@ -156,4 +156,34 @@ class RosetteResultTest {
         assertThrows(ResultException.class,
                 () -> ResultColumns.compute(x, y, g, 2, STEEL, null, out));
     }
+
+    @Test
+    void aStateGivenByItsStresses() {
+        StressState given = new StressState(120 * MPA, -40 * MPA, 35 * MPA);
+        // Closed form (Gere & Goodno, plane stress principal stresses, from memory):
+        // (sx + sy) / 2 +- sqrt(((sx - sy) / 2)^2 + tau^2) = 40 +- 87.3212 MPa; von Mises of a
+        // plane state sqrt(s1^2 - s1 s2 + s2^2) (Budynas & Nisbett, Shigley's, from memory).
+        double r = Math.sqrt(80 * 80 + 35 * 35) * MPA;
+        double s1 = 40 * MPA + r;
+        double s2 = 40 * MPA - r;
+        RosetteResult bare = RosetteResult.ofStress(given, null, PlaneCondition.PLANE_STRESS);
+        assertEquals(s1, bare.get(RosetteMember.SIGMA_1), 1e-6);
+        assertEquals(s2, bare.get(RosetteMember.SIGMA_2), 1e-6);
+        assertEquals(Math.sqrt(s1 * s1 - s1 * s2 + s2 * s2), bare.get(RosetteMember.VON_MISES), 1e-6);
+        assertFalse(bare.has(RosetteMember.EPS_X));
+        RosetteResult bareStrain = RosetteResult.ofStress(given, null, PlaneCondition.PLANE_STRAIN);
+        assertFalse(bareStrain.has(RosetteMember.SIGMA_Z));
+        assertFalse(bareStrain.has(RosetteMember.VON_MISES));
+        assertTrue(bareStrain.has(RosetteMember.TAU_MAX));
+        // With a material the strains follow by Hooke's law, and turning them back gives the
+        // same result as the strain path.
+        for (PlaneCondition c : PlaneCondition.values()) {
+            RosetteResult full = RosetteResult.ofStress(given, STEEL, c);
+            RosetteResult again = RosetteResult.of(Hooke.strain(given, STEEL, c), STEEL, c);
+            assertEquals(RosetteMember.values().length, full.asMap().size());
+            for (RosetteMember m : RosetteMember.values()) {
+                assertEquals(again.get(m), full.get(m), 1e-9 * Math.max(1, Math.abs(again.get(m))), m.scriptName());
+            }
+        }
+    }
 }

@@ -144,4 +144,17 @@ class StrainStateTest {
         assertThrows(StateException.class, () -> new StrainState(0, Double.POSITIVE_INFINITY, 0));
         assertThrows(StateException.class, () -> StrainState.ZERO.normalAt(Double.NaN));
     }
+
+    @Test
+    void superpositionOfStates() {
+        // Common practice: small strains superpose component by component.
+        StrainState a = new StrainState(412 * UE, -38 * UE, -121 * UE);
+        StrainState b = new StrainState(-50 * UE, 220 * UE, 75 * UE);
+        StrainState sum = a.plus(b.times(2));
+        assertEquals(312 * UE, sum.epsX(), 1e-18);
+        assertEquals(402 * UE, sum.epsY(), 1e-18);
+        assertEquals(29 * UE, sum.gammaXY(), 1e-18);
+        // Every direction's strain superposes too (the transformation is linear).
+        assertEquals(a.normalAt(0.3) + 2 * b.normalAt(0.3), sum.normalAt(0.3), 1e-18);
+    }
 }
