@@ -1,0 +1,57 @@
+package org.rosetra.runtime.render.plot;
+
+import de.erichseifert.vectorgraphics2d.VectorGraphics2D;
+import de.erichseifert.vectorgraphics2d.svg.SVGProcessor;
+import de.erichseifert.vectorgraphics2d.util.PageSize;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.nio.charset.StandardCharsets;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Writes a {@link Painting} as SVG through VectorGraphics2D, the library XChart uses for vectors.
+ *
+ * <p>XChart draws all its text as glyph outlines, so the file has no font reference and looks the
+ * same everywhere. VectorGraphics2D writes coordinates with up to 15 decimals; we round them to
+ * three (a thousandth of a pixel), which keeps the files small and diffs quiet.
+ */
+public final class SvgEncoder {
+
+  private static final Pattern LONG_DECIMAL = Pattern.compile("-?\\d+\\.\\d{4,}");
+
+  private SvgEncoder() {}
+
+  public static byte[] encode(Painting painting) {
+    VectorGraphics2D g = new VectorGraphics2D();
+    painting.paint(g);
+    g.dispose();
+    var document =
+        new SVGProcessor()
+            .getDocument(g.getCommands(), new PageSize(0, 0, painting.width(), painting.height()));
+    ByteArrayOutputStream out = new ByteArrayOutputStream();
+    try {
+      document.writeTo(out);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e); // an in-memory stream does not fail
+    }
+    String svg = out.toString(StandardCharsets.UTF_8);
+    return shortenDecimals(svg).getBytes(StandardCharsets.UTF_8);
+  }
+
+  /** Rounds every number with more than three decimals to three, half up, dropping trailing zeros. */
+  static String shortenDecimals(String svg) {
+    Matcher m = LONG_DECIMAL.matcher(svg);
+    StringBuilder sb = new StringBuilder(svg.length());
+    while (m.find()) {
+      BigDecimal rounded = new BigDecimal(m.group()).setScale(3, RoundingMode.HALF_UP);
+      String text = rounded.signum() == 0 ? "0" : rounded.stripTrailingZeros().toPlainString();
+      m.appendReplacement(sb, text);
+    }
+    m.appendTail(sb);
+    return sb.toString();
+  }
+}
