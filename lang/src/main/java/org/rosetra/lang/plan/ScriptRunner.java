@@ -1,10 +1,27 @@
 package org.rosetra.lang.plan;
 
+import java.io.IOException;
 import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.charset.MalformedInputException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
+import org.rosetra.lang.check.Diagnostics;
+import org.rosetra.lang.output.OutputFolder;
+import org.rosetra.lang.output.ResultsJson;
+import org.rosetra.runtime.render.table.PlainTextTable;
 
-/** Runs or checks one script file for the command line (being built). */
+/**
+ * Runs or checks one script file for the command line: reads it, checks it, computes it,
+ * prints its tables and check verdicts, and writes its outputs. Exit statuses as in
+ * LANGUAGE.md: 0 ran and passed, 1 a check failed, 2 an error (nothing computed or written).
+ */
 public final class ScriptRunner {
+    public static final int PASSED = 0;
+    public static final int CHECK_FAILED = 1;
+    public static final int ERROR = 2;
+
     private final PrintStream out;
     private final PrintStream err;
 
@@ -13,13 +30,108 @@ public final class ScriptRunner {
         this.err = err;
     }
 
-    public int run(Path script, RunOptions options) {
-        err.println("rosetra: run is not available yet");
-        return 2;
+    /** Parses and checks only. */
+    public int check(Path script) {
+        Loaded loaded = load(script);
+        if (loaded == null) {
+            return ERROR;
+        }
+        Diagnostics diagnostics = new Diagnostics();
+        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
+        if (!diagnostics.hasErrors()) {
+            loaded.session.check(diagnostics);
+        }
+        return report(diagnostics, loaded.session) ? ERROR : PASSED;
     }
 
-    public int check(Path script) {
-        err.println("rosetra: check is not available yet");
-        return 2;
+    public int run(Path script, RunOptions options) {
+        Loaded loaded = load(script);
+        if (loaded == null) {
+            return ERROR;
+        }
+        loaded.session.allowJava(options.allowJava());
+        Diagnostics diagnostics = new Diagnostics();
+        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
+        Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
+        if (report(diagnostics, loaded.session)) {
+            return ERROR;
+        }
+        for (Output o : outcome.outputs()) {
+            if (o instanceof Output.TableOutput t) {
+                out.println(PlainTextTable.render(t.table()));
+            }
+        }
+        for (CheckResult c : outcome.checks()) {
+            out.println(verdict(c));
+        }
+        try {
+            byte[] json = ResultsJson.write(outcome.results());
+            if (options.writeOutputs()) {
+                Path folder = options.outDir() != null ? options.outDir() : defaultOutputFolder(script);
+                OutputFolder.write(folder, loaded, outcome, json);
+            }
+            if (options.json() != null) {
+                OutputFolder.writeAtomically(options.json(), json);
+            }
+        } catch (IOException e) {
+            err.println("rosetra: error: cannot write the outputs: " + e.getMessage());
+            return ERROR;
+        }
+        return outcome.results().allChecksPass() ? PASSED : CHECK_FAILED;
+    }
+
+    /** {@code survey.strain} writes to {@code survey.out/} next to it. */
+    public static Path defaultOutputFolder(Path script) {
+        String name = script.getFileName().toString();
+        String stem = name.endsWith(".strain") ? name.substring(0, name.length() - ".strain".length()) : name;
+        Path parent = script.toAbsolutePath().getParent();
+        return parent.resolve(stem + ".out");
+    }
+
+    static String verdict(CheckResult c) {
+        StringBuilder s = new StringBuilder();
+        s.append(c.passes() ? "pass" : "FAIL").append("  check \"").append(c.check().label().value()).append('"');
+        if (c.unbounded()) {
+            s.append("  utilization unbounded (the limit is zero)");
+        } else if (!Double.isNaN(c.highest())) {
+            s.append(String.format(Locale.ROOT, "  utilization %.3f", c.highest()));
+        } else {
+            s.append("  (no case defines it)");
+        }
+        if (c.governingName() != null) {
+            s.append("  governing ").append(c.governingName());
+        }
+        if (c.at() != null) {
+            s.append(String.format(Locale.ROOT, " at %.3f s", c.at()));
+        }
+        return s.toString();
+    }
+
+    /** Prints the diagnostics; true when there were errors. */
+    private boolean report(Diagnostics diagnostics, Session session) {
+        if (!diagnostics.all().isEmpty()) {
+            err.print(diagnostics.render(session::sourceOf));
+        }
+        return diagnostics.hasErrors();
+    }
+
+    /** A script file read for a run, with the session it runs in. */
+    public record Loaded(Path path, String name, String text, Session session) {}
+
+    private Loaded load(Path script) {
+        if (!Files.isRegularFile(script)) {
+            err.println("rosetra: error: cannot find the script " + script);
+            return null;
+        }
+        try {
+            String text = Files.readString(script, StandardCharsets.UTF_8);
+            Path folder = script.toAbsolutePath().getParent();
+            return new Loaded(script, script.toString(), text, new Session(folder));
+        } catch (MalformedInputException e) {
+            err.println("rosetra: error: " + script + " is not UTF-8 text");
+        } catch (IOException e) {
+            err.println("rosetra: error: cannot read " + script + ": " + e.getMessage());
+        }
+        return null;
     }
 }

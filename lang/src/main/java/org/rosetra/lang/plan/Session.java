@@ -1,0 +1,223 @@
+package org.rosetra.lang.plan;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.rosetra.lang.check.Diagnostics;
+
+import org.rosetra.lang.syntax.Baseline;
+import org.rosetra.lang.syntax.Case;
+import org.rosetra.lang.syntax.Combine;
+import org.rosetra.lang.syntax.Declaration;
+import org.rosetra.lang.syntax.Let;
+import org.rosetra.lang.syntax.Report;
+import org.rosetra.lang.syntax.Script;
+import org.rosetra.lang.syntax.ScriptParser;
+import org.rosetra.lang.syntax.Series;
+import org.rosetra.lang.syntax.Statement;
+import org.rosetra.lang.syntax.Title;
+import org.rosetra.lang.syntax.Use;
+
+/**
+ * The definitions a front end has given so far. A script file is one submission; a notebook
+ * cell or a REPL entry is another. Submitting the same source again replaces what it defined
+ * before, and defining a name again replaces the older definition. Every front end (CLI, REPL,
+ * kernel) works through one of these.
+ */
+public final class Session {
+    /** Where {@code use "file.strain"} and series files are looked up. */
+    private final Path folder;
+    private final Map<String, String> sourceText = new HashMap<>();
+    private final List<Entry> entries = new ArrayList<>();
+    private final Map<String, List<Statement>> modules = new LinkedHashMap<>();
+    private boolean allowJava;
+
+    private record Entry(String source, Statement statement) {}
+
+    public Session(Path folder) {
+        this.folder = folder.toAbsolutePath().normalize();
+    }
+
+    public Path folder() {
+        return folder;
+    }
+
+    public void allowJava(boolean allow) {
+        this.allowJava = allow;
+    }
+
+    public boolean javaAllowed() {
+        return allowJava;
+    }
+
+    /** The text of a file or cell the session has seen, for diagnostics (null if unknown). */
+    public String sourceOf(String file) {
+        return sourceText.get(file);
+    }
+
+    /**
+     * Parses {@code text} (named {@code fileName} in diagnostics) and adds its statements,
+     * replacing what the same {@code source} gave before. Syntax errors go to
+     * {@code diagnostics} and leave the session as it was.
+     */
+    public List<Statement> submit(String source, String fileName, String text, Diagnostics diagnostics) {
+        sourceText.put(fileName, text);
+        Script script = ScriptParser.parse(fileName, text, diagnostics);
+        if (diagnostics.hasErrors()) {
+            return List.of();
+        }
+        for (Statement s : script.statements()) {
+            if (s instanceof Use use) {
+                loadModule(use, diagnostics);
+            }
+        }
+        if (diagnostics.hasErrors()) {
+            return List.of();
+        }
+        entries.removeIf(e -> e.source().equals(source));
+        for (Statement s : script.statements()) {
+            String key = key(s);
+            if (key != null) {
+                entries.removeIf(e -> key.equals(key(e.statement())));
+            }
+            entries.add(new Entry(source, s));
+        }
+        return script.statements();
+    }
+
+    /** Removes everything that {@code source} defined. */
+    public void forget(String source) {
+        entries.removeIf(e -> e.source().equals(source));
+    }
+
+    /** Every statement in force: the modules that were used, then the submissions in order. */
+    public List<Statement> statements() {
+        List<Statement> all = new ArrayList<>();
+        modules.values().forEach(all::addAll);
+        for (Entry e : entries) {
+            all.add(e.statement());
+        }
+        return all;
+    }
+
+    /** Checks every statement in force without computing anything. */
+    public void check(Diagnostics diagnostics) {
+        CheckerBridge.check(new Script("(session)", statements()), diagnostics);
+    }
+
+    /** Checks every statement in force, then computes it; errors come back as diagnostics. */
+    public Outcome evaluate(Diagnostics diagnostics) {
+        List<Statement> all = statements();
+        Script whole = new Script("(session)", all);
+        CheckerBridge.check(whole, diagnostics);
+        if (diagnostics.hasErrors()) {
+            return new Outcome(diagnostics, null, List.of(), List.of(), null);
+        }
+        Program program = Program.of(all);
+        Evaluation evaluation = new Evaluation(program);
+        try {
+            List<CheckResult> checks = new ArrayList<>();
+            for (var check : program.checks()) {
+                checks.add(Checks.test(check, evaluation));
+            }
+            RunResults results = ResultsBuilder.build(evaluation, checks);
+            List<Output> outputs = new OutputBuilder(evaluation, this).build(program.outputs());
+            return new Outcome(diagnostics, results, outputs, checks, evaluation);
+        } catch (EvaluationException e) {
+            diagnostics.error(e.span(), e.getMessage(), e.hint());
+        } catch (Evaluation.CycleException e) {
+            diagnostics.error(null, e.getMessage());
+        }
+        return new Outcome(diagnostics, null, List.of(), List.of(), null);
+    }
+
+    private void loadModule(Use use, Diagnostics diagnostics) {
+        String key;
+        String fileName;
+        String text;
+        try {
+            if (use.module() != null) {
+                key = use.module().text();
+                fileName = "stdlib/" + key + ".strain";
+                if (modules.containsKey(key)) {
+                    return;
+                }
+                try (InputStream in = Session.class.getResourceAsStream("/org/rosetra/stdlib/" + key + ".strain")) {
+                    if (in == null) {
+                        diagnostics.error(use.module().span(), "there is no standard module '" + key + "'",
+                                "the standard modules are: " + String.join(", ", StandardModules.names()));
+                        return;
+                    }
+                    text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+                }
+            } else {
+                Path file = folder.resolve(use.path().value()).normalize();
+                if (!file.startsWith(folder)) {
+                    diagnostics.error(use.path().span(), "a used file must lie in the script's folder or below it",
+                            "move " + use.path().value() + " next to the script");
+                    return;
+                }
+                key = file.toString();
+                fileName = folder.relativize(file).toString();
+                if (modules.containsKey(key)) {
+                    return;
+                }
+                if (!Files.isRegularFile(file)) {
+                    diagnostics.error(use.path().span(), "cannot find the file " + use.path().value());
+                    return;
+                }
+                text = Files.readString(file, StandardCharsets.UTF_8);
+            }
+        } catch (IOException e) {
+            diagnostics.error(use.span(), "cannot read the module: " + e.getMessage());
+            return;
+        }
+        sourceText.put(fileName, text);
+        Script script = ScriptParser.parse(fileName, text, diagnostics);
+        List<Statement> loaded = new ArrayList<>();
+        modules.put(key, loaded);
+        for (Statement s : script.statements()) {
+            if (s instanceof Use nested) {
+                loadModule(nested, diagnostics);
+            } else {
+                loaded.add(s);
+            }
+        }
+    }
+
+    /** The name a statement defines (a later definition replaces it), or null. */
+    static String key(Statement s) {
+        if (s instanceof Declaration d) {
+            return d.name().text();
+        }
+        if (s instanceof Baseline b) {
+            return b.name().text();
+        }
+        if (s instanceof Case c) {
+            return c.name().text();
+        }
+        if (s instanceof Combine c) {
+            return c.name().text();
+        }
+        if (s instanceof Series x) {
+            return x.name().text();
+        }
+        if (s instanceof Let l) {
+            return l.name().text();
+        }
+        if (s instanceof Title) {
+            return "#title";
+        }
+        if (s instanceof Report) {
+            return "#report";
+        }
+        return null;
+    }
+}
