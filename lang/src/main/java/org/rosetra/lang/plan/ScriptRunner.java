@@ -80,12 +80,62 @@ public final class ScriptRunner {
         return outcome.results().allChecksPass() ? PASSED : CHECK_FAILED;
     }
 
+    /**
+     * Re-runs the script without writing anything and compares every number with the committed
+     * results: 0 when all agree, 1 when any differs, 2 on a script error.
+     */
+    public int verify(Path script, Path committedResults, double rtol, boolean allowJava) {
+        if (!(rtol >= 0)) {
+            err.println("rosetra: error: --rtol must be zero or positive, got " + rtol);
+            return ERROR;
+        }
+        Object committed;
+        try {
+            committed = org.rosetra.lang.output.JsonTree.parse(Files.readAllBytes(committedResults));
+        } catch (java.nio.file.NoSuchFileException e) {
+            err.println("rosetra: error: there are no committed results at " + committedResults
+                    + "; run the script once and commit its results.json, or name them with --against");
+            return ERROR;
+        } catch (IOException e) {
+            err.println("rosetra: error: cannot read " + committedResults + ": " + e.getMessage());
+            return ERROR;
+        }
+        Loaded loaded = load(script);
+        if (loaded == null) {
+            return ERROR;
+        }
+        loaded.session.allowJava(allowJava);
+        Diagnostics diagnostics = new Diagnostics();
+        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
+        Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
+        if (report(diagnostics, loaded.session)) {
+            return ERROR;
+        }
+        Object now;
+        try {
+            now = org.rosetra.lang.output.JsonTree.parse(ResultsJson.write(outcome.results()));
+        } catch (IOException e) {
+            throw new IllegalStateException("results.json written by this tool does not read back", e);
+        }
+        var differences = org.rosetra.lang.output.ResultsComparison.compare(committed, now, rtol);
+        for (var d : differences) {
+            out.println(d);
+        }
+        if (differences.isEmpty()) {
+            out.println("verified: every number agrees with " + committedResults
+                    + " (relative tolerance " + rtol + ")");
+            return PASSED;
+        }
+        out.println(differences.size() + (differences.size() == 1 ? " difference" : " differences")
+                + " from " + committedResults);
+        return CHECK_FAILED;
+    }
+
     /** {@code survey.strain} writes to {@code survey.out/} next to it. */
     public static Path defaultOutputFolder(Path script) {
         String name = script.getFileName().toString();
         String stem = name.endsWith(".strain") ? name.substring(0, name.length() - ".strain".length()) : name;
-        Path parent = script.toAbsolutePath().getParent();
-        return parent.resolve(stem + ".out");
+        return script.resolveSibling(stem + ".out");
     }
 
     static String verdict(CheckResult c) {
