@@ -28,6 +28,6 @@ final class VerifyCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Path committed = against != null ? against : ScriptRunner.defaultOutputFolder(script).resolve("results.json");
-        return new ScriptRunner(System.out, System.err).verify(script, committed, rtol, allowJava);
+        return new ScriptRunner(System.out, System.err, VersionProvider.version()).verify(script, committed, rtol, allowJava);
     }
 }

@@ -43,7 +43,12 @@ final class Figures {
     }
 
     /** The strain state (and the stress state, when there is a material) that a plot draws. */
-    private record Pictured(StrainState strain, StressState stress, String rosette, String caseName) {}
+    private record Pictured(StrainState strain, StressState stress, String rosette, String caseName) {
+        /** {@code web_top-proof_60kN} for a rosette in a case, else the state's written name. */
+        String stem(String label) {
+            return rosette != null ? rosette + "-" + caseName : label;
+        }
+    }
 
     private static Pictured pictured(Plot plot, Value target, Evaluation evaluation) {
         if (target instanceof Value.RosetteInCase rc) {
@@ -86,7 +91,7 @@ final class Figures {
                     u.fromSi(p.stress().sigmaY()), u.fromSi(p.stress().tauXY()),
                     "normal stress σ [" + u.symbol() + "]", "shear stress τ [" + u.symbol() + "]"));
         }
-        return figure(plot, "Mohr's circles, " + label, "mohr-" + label, new MohrFigure(circles));
+        return figure(plot, "Mohr's circles, " + label, "mohr-" + p.stem(label), new MohrFigure(circles));
     }
 
     private static Output directions(Plot plot, Value target, Evaluation evaluation, DisplayUnits display, String label) {
@@ -113,7 +118,7 @@ final class Figures {
                 u.fromSi(p.strain().epsX()), u.fromSi(p.strain().epsY()), u.fromSi(p.strain().gammaXY()),
                 angles.stream().mapToDouble(Double::doubleValue).toArray(),
                 readings.stream().mapToDouble(Double::doubleValue).toArray(), u.symbol());
-        return figure(plot, "Strain against direction, " + label, "directions-" + label, new DirectionFigure(curves));
+        return figure(plot, "Strain against direction, " + label, "directions-" + p.stem(label), new DirectionFigure(curves));
     }
 
     private static Output value(Plot plot, Value target, Evaluation evaluation, DisplayUnits display, String label,
@@ -154,7 +159,6 @@ final class Figures {
     }
 
     private static Output figure(Plot plot, String caption, String stem, Figure figure) {
-        RenderedFigure r = figure.render(FileStem.from(stem));
-        return new Output.FigureOutput(plot, caption, r.name(), r.svg(), r.png());
+        return new Output.FigureOutput(plot, caption, figure.render(FileStem.from(stem)));
     }
 }

@@ -78,10 +78,10 @@ final class OutputBuilder {
         for (Expr item : t.items()) {
             if (item instanceof NameRef ref && evaluation.isRosette(ref.name())) {
                 flushColumns(t, columns, out);
-                out.add(new Output.TableOutput(t, rosetteTable(ref.name())));
+                out.add(new Output.TableOutput(t, "rosette-" + ref.name(), rosetteTable(ref.name())));
             } else if (item instanceof NameRef ref && evaluation.isState(ref.name())) {
                 flushColumns(t, columns, out);
-                out.add(new Output.TableOutput(t, stateTable(ref.name())));
+                out.add(new Output.TableOutput(t, "state-" + ref.name(), stateTable(ref.name())));
             } else {
                 columns.add(item);
             }
@@ -151,7 +151,8 @@ final class OutputBuilder {
                 rows.add(new Row(evaluation.axis().get(i), cells));
             }
         }
-        out.add(new Output.TableOutput(t, new ResultTable("Values per case", columns, rows)));
+        String name = org.rosetra.runtime.render.plot.FileStem.from("values-" + columns.get(0).header());
+        out.add(new Output.TableOutput(t, name, new ResultTable("Values per case", columns, rows)));
         items.clear();
     }
 

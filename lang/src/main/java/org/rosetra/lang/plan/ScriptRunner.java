@@ -8,7 +8,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import org.rosetra.lang.check.Diagnostics;
+import java.util.ArrayList;
+import java.util.List;
 import org.rosetra.lang.output.OutputFolder;
+import org.rosetra.lang.output.RecordBuilder;
+import org.rosetra.runtime.render.record.InputFile;
+import org.rosetra.runtime.render.record.Record;
 import org.rosetra.lang.output.ResultsJson;
 import org.rosetra.runtime.render.table.PlainTextTable;
 
@@ -24,10 +29,12 @@ public final class ScriptRunner {
 
     private final PrintStream out;
     private final PrintStream err;
+    private final String toolVersion;
 
-    public ScriptRunner(PrintStream out, PrintStream err) {
+    public ScriptRunner(PrintStream out, PrintStream err, String toolVersion) {
         this.out = out;
         this.err = err;
+        this.toolVersion = toolVersion;
     }
 
     /** Parses and checks only. */
@@ -68,7 +75,12 @@ public final class ScriptRunner {
             byte[] json = ResultsJson.write(outcome.results());
             if (options.writeOutputs()) {
                 Path folder = options.outDir() != null ? options.outDir() : defaultOutputFolder(script);
-                OutputFolder.write(folder, loaded, outcome, json);
+                List<InputFile> inputs = new ArrayList<>();
+                inputs.add(RecordBuilder.input(script.getFileName().toString(), loaded.text));
+                loaded.session.moduleSources().forEach((name, text) -> inputs.add(RecordBuilder.input(name, text)));
+                Record record = RecordBuilder.build(script.getFileName().toString(), loaded.text, outcome,
+                        loaded.session, inputs, toolVersion);
+                OutputFolder.write(folder, record, json);
             }
             if (options.json() != null) {
                 OutputFolder.writeAtomically(options.json(), json);

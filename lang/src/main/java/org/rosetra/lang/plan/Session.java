@@ -37,6 +37,7 @@ public final class Session {
     private final Map<String, String> sourceText = new HashMap<>();
     private final List<Entry> entries = new ArrayList<>();
     private final Map<String, List<Statement>> modules = new LinkedHashMap<>();
+    private final Map<String, String> moduleFileNames = new HashMap<>();
     private boolean allowJava;
 
     private record Entry(String source, Statement statement) {}
@@ -92,6 +93,16 @@ public final class Session {
         return script.statements();
     }
 
+    /** The modules loaded by {@code use}, as file name (as diagnostics show it) and text, in load order. */
+    public Map<String, String> moduleSources() {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (String key : modules.keySet()) {
+            String name = moduleFileNames.get(key);
+            out.put(name, sourceText.get(name));
+        }
+        return out;
+    }
+
     /** Removes everything that {@code source} defined. */
     public void forget(String source) {
         entries.removeIf(e -> e.source().equals(source));
@@ -118,7 +129,7 @@ public final class Session {
         Script whole = new Script("(session)", all);
         CheckerBridge.check(whole, diagnostics);
         if (diagnostics.hasErrors()) {
-            return new Outcome(diagnostics, null, List.of(), List.of(), null);
+            return new Outcome(diagnostics, null, List.of(), List.of(), null, null);
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
@@ -128,14 +139,15 @@ public final class Session {
                 checks.add(Checks.test(check, evaluation));
             }
             RunResults results = ResultsBuilder.build(evaluation, checks);
-            List<Output> outputs = new OutputBuilder(evaluation, this).build(program.outputs());
-            return new Outcome(diagnostics, results, outputs, checks, evaluation);
+            OutputBuilder builder = new OutputBuilder(evaluation, this);
+            List<Output> outputs = builder.build(program.outputs());
+            return new Outcome(diagnostics, results, outputs, checks, evaluation, builder.display());
         } catch (EvaluationException e) {
             diagnostics.error(e.span(), e.getMessage(), e.hint());
         } catch (Evaluation.CycleException e) {
             diagnostics.error(null, e.getMessage());
         }
-        return new Outcome(diagnostics, null, List.of(), List.of(), null);
+        return new Outcome(diagnostics, null, List.of(), List.of(), null, null);
     }
 
     private void loadModule(Use use, Diagnostics diagnostics) {
@@ -180,6 +192,7 @@ public final class Session {
             return;
         }
         sourceText.put(fileName, text);
+        moduleFileNames.put(key, fileName);
         Script script = ScriptParser.parse(fileName, text, diagnostics);
         List<Statement> loaded = new ArrayList<>();
         modules.put(key, loaded);
