@@ -133,7 +133,12 @@ public final class Evaluation {
         if (let.isFunction()) {
             return new Value.Function(let, let.params().stream().map(p -> p.name().text()).toList());
         }
-        return cached("value " + name, () -> expressions.evaluate(let.body(), Map.of()));
+        try {
+            return cached("value " + name, () -> expressions.evaluate(let.body(), Map.of()));
+        } catch (CycleException e) {
+            throw new EvaluationException(let.name().span(), e.getMessage(),
+                    "a value cannot be defined through itself; break the chain");
+        }
     }
 
     public boolean isLet(String name) {

@@ -145,7 +145,7 @@ public final class Session {
         } catch (EvaluationException e) {
             diagnostics.error(e.span(), e.getMessage(), e.hint());
         } catch (Evaluation.CycleException e) {
-            diagnostics.error(null, e.getMessage());
+            diagnostics.error(all.get(0).span(), e.getMessage());
         }
         return new Outcome(diagnostics, null, List.of(), List.of(), null, null);
     }
