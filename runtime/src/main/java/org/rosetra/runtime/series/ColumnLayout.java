@@ -17,7 +17,10 @@ record ColumnLayout(List<String> headerNames, int[] columnOfField) {
             String wanted = source.columnName(column);
             int field = names.indexOf(wanted);
             if (field < 0) {
-                String nearest = NearestName.in(names, wanted);
+                // A name another column already asks for is not the one meant.
+                List<String> others = names.stream()
+                        .filter(n -> !source.valueColumns().contains(n) && !n.equals(source.timeColumn())).toList();
+                String nearest = NearestName.in(others, wanted);
                 throw new SeriesDataException(source.shownName(), 1, wanted,
                         "not in the header (its columns: " + String.join(", ", names) + ")"
                                 + (nearest == null ? "" : "; did you mean \"" + nearest + "\"?"));
