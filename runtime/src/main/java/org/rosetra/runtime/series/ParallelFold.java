@@ -33,6 +33,7 @@ final class ParallelFold<A> {
     /** The merged result, or null when a quote was seen and the file must be read in one pass. */
     FoldResult<A> run(int parts) throws IOException {
         ReadControl control = new ReadControl(source.shownName(), options, size);
+        control.bytesRead(header.dataStart());
         long dataStart = header.dataStart();
         long dataBytes = size - dataStart;
         @SuppressWarnings("unchecked")

@@ -89,7 +89,7 @@ final class PartParser {
                      ChunkSink sink) throws IOException {
         ownedEnd = end;
         bufferStart = startsMidLine ? start - 1 : start;
-        countedUpTo = bufferStart;
+        countedUpTo = start; // the byte before a mid-line start is the part before's
         pos = 0;
         limit = 0;
         atFileEnd = bufferStart >= fileEnd;

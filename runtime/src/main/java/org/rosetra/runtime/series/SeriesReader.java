@@ -42,6 +42,7 @@ public final class SeriesReader {
             SeriesHeader header = SeriesHeader.read(channel, source.shownName(), source.delimiter());
             ColumnLayout layout = ColumnLayout.of(source, header);
             ReadControl control = new ReadControl(source.shownName(), options, size);
+            control.bytesRead(header.dataStart());
             PartParser parser = new PartParser(0, channel, source, layout, true, size, control, options);
             PartOutcome outcome = parser.read(header.dataStart(), size, false, header.lines() + 1, 0, sink);
             if (outcome.error() != null) {
@@ -80,6 +81,7 @@ public final class SeriesReader {
             }
             A accumulator = fold.start();
             ReadControl control = new ReadControl(source.shownName(), options, size);
+            control.bytesRead(header.dataStart());
             PartParser parser = new PartParser(0, channel, source, layout, true, size, control, options);
             PartOutcome outcome = parser.read(header.dataStart(), size, false, header.lines() + 1, 0, chunk -> {
                 fold.add(accumulator, chunk);

@@ -149,7 +149,7 @@ class SeriesReaderValuesTest {
     }
 
     /** A fold that checks every row: an order-free exact checksum of all values' bits. */
-    static final class ColumnChecksum implements SeriesFold<double[]> {
+    static class ColumnChecksum implements SeriesFold<double[]> {
         @Override
         public double[] start() {
             return new double[1];
