@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.rosetra.runtime.series.Chunk;
 import org.rosetra.runtime.series.Extremes;
 import org.rosetra.runtime.series.FoldResult;
+import org.rosetra.runtime.series.ProgressBar;
 import org.rosetra.runtime.series.ReadOptions;
 import org.rosetra.runtime.series.SeriesFold;
 import org.rosetra.runtime.series.SeriesReader;
@@ -30,7 +31,15 @@ public final class SeriesBench {
         int threads = args.length > 1 ? Integer.parseInt(args[1]) : 2;
         SeriesSource source = new SeriesSource(file, file.toString(), ',', '.', "t_s", List.of("g1", "g2", "g3"));
         ReadOptions options = ReadOptions.defaults().withThreads(threads);
+        // A bar only for a person watching; under the benchmark runner there is no console.
+        ProgressBar bar = System.console() != null ? new ProgressBar(System.err, "reading " + file.getFileName()) : null;
+        if (bar != null) {
+            options = options.withProgress(bar);
+        }
         FoldResult<PeakVonMises> result = SeriesReader.fold(source, options, new PeakVonMisesFold(options.chunkRows()));
+        if (bar != null) {
+            bar.finish();
+        }
         Extremes vm = result.value().extremes;
         System.out.printf(Locale.ROOT, "samples %d  max von Mises %.6f MPa at t = %.3f s%n",
                 result.samples(), vm.max() / 1e6, vm.timeOfMax());
