@@ -79,6 +79,19 @@ final class PartParser {
         this.buffer = new byte[options.bufferBytes()];
     }
 
+    private static final int NEEDS_DATA = 0;
+    private static final int CHUNK_FULL = 1;
+    private static final int PART_DONE = 2;
+
+    // The row loop's state, kept between calls of parseRows.
+    private long line;
+    private long rows;
+    private int inChunk;
+    private long chunkFirstLine;
+    private long firstRowLine;
+    private double firstTime;
+    private double previousTime;
+
     /**
      * Reads the rows that start in {@code [start, end)}. When {@code startsMidLine} the part
      * begins after the first line break at or after {@code start - 1} (that line belongs to
@@ -93,42 +106,72 @@ final class PartParser {
         pos = 0;
         limit = 0;
         atFileEnd = bufferStart >= fileEnd;
+        line = lineBase;
+        rows = 0;
+        inChunk = 0;
+        chunkFirstLine = lineBase;
+        firstRowLine = lineBase;
+        firstTime = Double.NaN;
+        previousTime = Double.NaN;
         if (startsMidLine && !skipToNextLine()) {
             return new PartOutcome(0, 0, lineBase, Double.NaN, Double.NaN, null, false);
         }
-        long line = lineBase;
-        long rows = 0;
-        int inChunk = 0;
-        long chunkFirstLine = lineBase;
-        long firstRowLine = lineBase;
-        double firstTime = Double.NaN;
-        double previousTime = Double.NaN;
-        final double[] time = columns[0];
         boolean stoppedEarly = false;
         try {
+            // The row loop runs in parseRows, entered afresh for every chunk and buffer, so each
+            // thread soon runs its compiled form rather than waiting in one long interpreted call.
             while (true) {
-                if (pos >= limit) {
-                    if (atFileEnd) {
+                int status = parseRows();
+                if (status == CHUNK_FULL) {
+                    boolean more = sink.accept(new Chunk(sampleBase + rows - inChunk, chunkFirstLine, inChunk, columns));
+                    inChunk = 0;
+                    if (!more || control.shouldStop(part)) {
+                        stoppedEarly = true;
                         break;
                     }
+                } else if (status == NEEDS_DATA) {
                     if (control.shouldStop(part)) {
                         stoppedEarly = true;
                         break;
                     }
                     refill();
-                    continue;
+                } else {
+                    break;
+                }
+            }
+            if (inChunk > 0 && !stoppedEarly) {
+                stoppedEarly = !sink.accept(new Chunk(sampleBase + rows - inChunk, chunkFirstLine, inChunk, columns));
+            }
+            countProgress(Math.min(ownedEnd, fileEnd));
+            return new PartOutcome(rows, line - lineBase, firstRowLine, firstTime, previousTime, null, stoppedEarly);
+        } catch (SeriesDataException e) {
+            control.failed(part);
+            return new PartOutcome(rows, line - lineBase, firstRowLine, firstTime, previousTime, e, true);
+        }
+    }
+
+    /** Parses rows until the chunk is full, the buffer runs out, or the part ends. */
+    private int parseRows() {
+        final double[] time = columns[0];
+        long line = this.line;
+        long rows = this.rows;
+        int inChunk = this.inChunk;
+        double previousTime = this.previousTime;
+        int status;
+        try {
+            while (true) {
+                if (pos >= limit) {
+                    status = atFileEnd ? PART_DONE : NEEDS_DATA;
+                    break;
                 }
                 if (bufferStart + pos >= ownedEnd) {
+                    status = PART_DONE;
                     break;
                 }
                 int lineBreaks = parseRow(inChunk, line);
                 if (lineBreaks == INCOMPLETE) {
-                    if (control.shouldStop(part)) {
-                        stoppedEarly = true;
-                        break;
-                    }
-                    refill();
-                    continue;
+                    status = NEEDS_DATA;
+                    break;
                 }
                 if (rowWasBlank) {
                     line += lineBreaks;
@@ -150,23 +193,17 @@ final class PartParser {
                 rows++;
                 inChunk++;
                 if (inChunk == chunkRows) {
-                    boolean more = sink.accept(new Chunk(sampleBase + rows - inChunk, chunkFirstLine, inChunk, columns));
-                    inChunk = 0;
-                    if (!more || control.shouldStop(part)) {
-                        stoppedEarly = true;
-                        break;
-                    }
+                    status = CHUNK_FULL;
+                    break;
                 }
             }
-            if (inChunk > 0 && !stoppedEarly) {
-                stoppedEarly = !sink.accept(new Chunk(sampleBase + rows - inChunk, chunkFirstLine, inChunk, columns));
-            }
-            countProgress(Math.min(ownedEnd, fileEnd));
-            return new PartOutcome(rows, line - lineBase, firstRowLine, firstTime, previousTime, null, stoppedEarly);
-        } catch (SeriesDataException e) {
-            control.failed(part);
-            return new PartOutcome(rows, line - lineBase, firstRowLine, firstTime, previousTime, e, true);
+        } finally {
+            this.line = line;
+            this.rows = rows;
+            this.inChunk = inChunk;
+            this.previousTime = previousTime;
         }
+        return status;
     }
 
     private int fieldOf(int column) {
