@@ -39,7 +39,9 @@ grammar Rosetra;
     }
 }
 
-script     : (statement? NL)* statement? EOF ;
+// Shaped so that every decision between lines needs one token of lookahead: an error
+// then shows up where it is, not as a failure to predict the whole script.
+script     : statement? (NL statement?)* EOF ;
 
 statement
     : TITLE STRING                                              # titleStatement
@@ -58,7 +60,7 @@ statement
     | DISPLAY anyName (ASSIGN unit)?                            # displayStatement
     ;
 
-block       : LBRACE (field? NL)* field? RBRACE ;
+block       : LBRACE field? (NL field?)* RBRACE ;
 field       : anyName ASSIGN fieldValue ;
 // `a to b` is a time window; `a, b, c unit` a reading list (or a list of column names).
 fieldValue  : expr ( TO expr | (COMMA NL* expr)* ) ;

@@ -34,7 +34,8 @@ public final class ScriptParser {
         RosetraLexer lexer = new RosetraLexer(CharStreams.fromString(text, fileName));
         lexer.removeErrorListeners();
         List<? extends Token> raw = lexer.getAllTokens();
-        List<Token> tokens = new BracketBalancer(fileName, diagnostics).balance(raw);
+        BracketBalancer balancer = new BracketBalancer(fileName, diagnostics);
+        List<Token> tokens = balancer.balance(raw);
         CommonTokenStream stream = new CommonTokenStream(new ListTokenSource(tokens, fileName));
         RosetraParser parser = new RosetraParser(stream);
         parser.unitSymbols = unitSymbols;
@@ -51,7 +52,7 @@ public final class ScriptParser {
             parser.reset();
             parser.getInterpreter().setPredictionMode(PredictionMode.LL);
             parser.setErrorHandler(new DefaultErrorStrategy());
-            parser.addErrorListener(new SyntaxErrorListener(fileName, diagnostics));
+            parser.addErrorListener(new SyntaxErrorListener(fileName, diagnostics, balancer.linesReported()));
             tree = parser.script();
         }
         return new TreeBuilder(fileName, diagnostics).script(tree);
