@@ -116,6 +116,7 @@ DISPLAY  : 'display' ;
 TO       : 'to' ;
 
 // A Java-bodied function: kept as one raw token, braces balanced, for the Java bridge.
+// `java` followed by `{` always lexes as this token, so `java` is best left unused as a name.
 JAVA_BLOCK : 'java' [ \t]* JAVA_BRACES ;
 fragment JAVA_BRACES : '{' ( JAVA_BRACES | JAVA_STRING | JAVA_CHAR | ~[{}"'] )* '}' ;
 fragment JAVA_STRING : '"' ( '\\' . | ~["\\\r\n] )* '"' ;

@@ -227,8 +227,14 @@ public final class DimensionChecker {
         if (value instanceof ReadingList list) {
             Unit unit = list.unitText() == null ? Unit.ONE : unit(list, list.unitText(), list.unitSpan());
             if (unit != null && !unit.dimension().equals(dimension)) {
-                error(list.unitSpan(), what + " need " + describe(dimension) + ", got " + describe(unit.dimension()),
-                        null);
+                error(list.unitSpan(), what + " need " + (dimension.isNone() ? "a strain unit (ue, %)"
+                        : describe(dimension)) + ", got " + describe(unit.dimension()), null);
+            }
+            if (list.unitText() == null && dimension.isNone()
+                    && list.values().stream().anyMatch(v -> Math.abs(v) >= 0.1)) {
+                diagnostics.warning(list.span(), what + " have no unit, so they are plain strain "
+                        + "(" + format(list.values().get(0)) + " is " + format(list.values().get(0) * 1e6) + " ue)",
+                        "give the unit after the last reading: ... ue");
             }
             record(list, new Value(dimension, false));
         } else if (value instanceof NumberLit || value instanceof QuantityLit) {

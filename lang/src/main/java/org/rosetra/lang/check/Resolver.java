@@ -264,9 +264,12 @@ public final class Resolver {
             Integer arms = armCounts.get(name);
             int given = countOf(field.value());
             if (arms != null && given >= 0 && given != arms) {
+                boolean columns = field.value() instanceof StringList || field.value() instanceof StringLit;
+                String what = columns ? (given == 1 ? " column is" : " columns are")
+                        : (given == 1 ? " reading is" : " readings are");
                 diagnostics.error(field.value().span(), "rosette " + name + " has " + arms + " arms, but "
-                        + given + (given == 1 ? " reading is" : " readings are") + " given",
-                        "list one reading per arm, in arm order");
+                        + given + what + " given", columns ? "name one column per arm, in arm order"
+                        : "list one reading per arm, in arm order");
             }
         }
     }

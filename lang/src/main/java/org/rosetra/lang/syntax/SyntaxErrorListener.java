@@ -80,6 +80,10 @@ final class SyntaxErrorListener extends BaseErrorListener {
                     "write mm^2 or s^-1");
         }
         if (!endOfLine && expected.contains(NL)) {
+            if (type == COMMA && !inBlock) {
+                return new Explained("a list of values belongs in a field of a block",
+                        "readings go in a case or baseline: web_top = 412, -38, -121 ue");
+            }
             if (type == RBRACE) {
                 return new Explained("'}' must stand on its own line, or after the last field", null);
             }

@@ -118,4 +118,15 @@ class CheckedScriptTest {
         check(PRELUDE + "let a = s355.ultimate\n").onlyError(PRELUDE_LINES + 1, 14,
                 "material s355 does not give 'ultimate'");
     }
+
+    @Test
+    void theLanguageReferenceExamplesCheckClean() throws IOException {
+        // LANGUAGE.md, every code block; it names web_low without declaring it, so we add one.
+        String text;
+        try (InputStream in = CheckedScriptTest.class.getResourceAsStream("/syntax/language-examples.strain")) {
+            text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+        check(text + "\nrosette web_low {\n  layout = delta\n  gauge = foil350\n  material = s355\n}\n")
+                .noErrors();
+    }
 }

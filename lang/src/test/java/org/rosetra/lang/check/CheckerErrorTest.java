@@ -166,4 +166,15 @@ class CheckerErrorTest {
         Checked checked = check("let a = sin(2)\nlet b = 2 MPa + 1 deg\nlet c = nothing\n");
         assertEquals(3, checked.errors().size());
     }
+
+    @Test
+    void readingsWithoutAUnitAreWarnedAbout() {
+        // Our own design: a bare 412 is a plain strain fraction, almost surely a missing ue.
+        Checked checked = check(PRELUDE + "case proof {\n  web_top = 412, -38, -121\n}\n");
+        checked.noErrors();
+        Diagnostic warning = checked.diagnostics().sorted().get(0);
+        assertEquals(Severity.WARNING, warning.severity());
+        assertEquals(L + 1, warning.span().line());
+        assertEquals(13, warning.span().column());
+    }
 }
