@@ -60,6 +60,9 @@ statement
     | DISPLAY anyName (ASSIGN unit)?                            # displayStatement
     ;
 
+// A bare value, for a REPL or notebook cell that asks to see one (not part of a script).
+expressionCell : NL* expr NL* EOF ;
+
 block       : LBRACE field? (NL field?)* RBRACE ;
 field       : anyName ASSIGN fieldValue ;
 // `a to b` is a time window; `a, b, c unit` a reading list (or a list of column names).

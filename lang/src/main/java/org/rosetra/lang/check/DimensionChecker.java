@@ -87,6 +87,15 @@ public final class DimensionChecker {
         }
     }
 
+    /** Checks one value outside any statement; its dimensions land in {@link #dimensions()}. */
+    public void checkValue(Expr expr) {
+        ValueType type = typeOf(expr, Map.of());
+        if (!(type instanceof ValueType.Unknown) && !(type instanceof Value)
+                && !(type instanceof Entity entity && entity.symbol().kind().hasResults())) {
+            value(type, expr, "a cell");
+        }
+    }
+
     // ---- blocks ------------------------------------------------------------------------
 
     private void declaration(Declaration declaration) {

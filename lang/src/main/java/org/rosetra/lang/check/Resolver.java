@@ -45,6 +45,16 @@ public final class Resolver {
         return new Resolution(new SymbolTable(symbols), Collections.unmodifiableMap(new LinkedHashMap<>(armCounts)));
     }
 
+    /**
+     * Resolves the names of one value against symbols already known (a REPL or notebook
+     * cell that asks to see a value).
+     */
+    public void resolveExpression(SymbolTable known, Expr expr) {
+        symbols.clear();
+        known.all().forEach(symbol -> symbols.put(symbol.text(), symbol));
+        names(expr, Set.of());
+    }
+
     // ---- declarations ------------------------------------------------------------------
 
     private void declare(Statement statement) {

@@ -2,6 +2,7 @@ package org.rosetra.lang.check;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.rosetra.lang.syntax.Expr;
 import org.rosetra.lang.syntax.Script;
 
 /**
@@ -23,5 +24,18 @@ public final class ScriptChecker {
         caseOrder.addAll(resolution.symbols().namesOf(SymbolKind.COMBINATION));
         return new CheckedScript(script, resolution.symbols(), checker.dimensions(), checker.perCase(),
                 checker.units(), resolution.armCounts(), List.copyOf(caseOrder));
+    }
+
+    /**
+     * Checks a bare value (from {@code ScriptParser.parseExpression}) against a checked
+     * script: the result is the context with the value's own dimensions, columns and units.
+     * A rosette or state by name is accepted (a cell may show its table).
+     */
+    public static CheckedScript checkExpression(CheckedScript context, Expr expr, Diagnostics diagnostics) {
+        new Resolver(diagnostics).resolveExpression(context.symbols(), expr);
+        DimensionChecker checker = new DimensionChecker(context.symbols(), context.armCounts(), diagnostics);
+        checker.checkValue(expr);
+        return new CheckedScript(context.script(), context.symbols(), checker.dimensions(), checker.perCase(),
+                checker.units(), context.armCounts(), context.caseOrder());
     }
 }

@@ -129,4 +129,19 @@ class CheckedScriptTest {
         check(text + "\nrosette web_low {\n  layout = delta\n  gauge = foil350\n  material = s355\n}\n")
                 .noErrors();
     }
+
+    @Test
+    void aCellAsksForOneValue() throws IOException {
+        // Our own design for the REPL and notebook: a bare value, checked against the script.
+        Checked survey = check(fixture());
+        Diagnostics diagnostics = new Diagnostics();
+        org.rosetra.lang.syntax.Expr value = ScriptParser.parseExpression("cell",
+                "web_top.von_mises[proof_60kN] / allowable", diagnostics);
+        CheckedScript checked = ScriptChecker.checkExpression(survey.script(), value, diagnostics);
+        assertFalse(diagnostics.hasErrors(), () -> diagnostics.render(f -> null));
+        assertEquals(Dimension.NONE, checked.dimensionOf(value));
+        org.rosetra.lang.syntax.Expr wrong = ScriptParser.parseExpression("cell", "web_tp.eps_x", diagnostics);
+        ScriptChecker.checkExpression(survey.script(), wrong, diagnostics);
+        assertEquals("did you mean 'web_top'?", diagnostics.sorted().get(0).hint());
+    }
 }
