@@ -444,21 +444,17 @@ public final class DimensionChecker {
         if (symbol.kind().hasResults()) {
             Optional<BuiltinMember> result = Builtins.resultMember(name);
             if (result.isEmpty()) {
-                error(member.member().span(), symbol.kind().described().substring(2) + " " + symbol.text()
+                error(member.member().span(), symbol.kind().keyword() + " " + symbol.text()
                         + " has no member '" + name + "'",
                         NearestName.hint(name, Builtins.resultMembers().stream().map(BuiltinMember::name).toList()));
                 return ValueType.UNKNOWN;
             }
-            if (result.get().needsMaterial() && materialOf(symbol) == null
-                    && symbol.kind() != SymbolKind.STRESS_STATE) {
+            // A stress given directly needs a material for its strains, a strain for its stresses.
+            boolean needsMaterial = symbol.kind() == SymbolKind.STRESS_STATE
+                    ? result.get().kind().equals("strain") : result.get().needsMaterial();
+            if (needsMaterial && materialOf(symbol) == null) {
                 error(member.member().span(), symbol.text() + " has no material, so it has no " + name,
-                        "add material = ... to " + symbol.kind().described().substring(2) + " " + symbol.text());
-                return ValueType.UNKNOWN;
-            }
-            if (symbol.kind() == SymbolKind.STRESS_STATE && !result.get().needsMaterial()
-                    && materialOf(symbol) == null) {
-                error(member.member().span(), "stress state " + symbol.text() + " has no material, so it has no "
-                        + name, "add material = ... to stress " + symbol.text());
+                        "add material = ... to " + symbol.kind().keyword() + " " + symbol.text());
                 return ValueType.UNKNOWN;
             }
             boolean columns = symbol.kind() == SymbolKind.ROSETTE && !entity.caseChosen();

@@ -2,22 +2,29 @@ package org.rosetra.lang.check;
 
 /** What a declared name stands for. */
 public enum SymbolKind {
-    MATERIAL("a material"),
-    GAUGE("a gauge"),
-    ROSETTE("a rosette"),
-    STRAIN_STATE("a strain state"),
-    STRESS_STATE("a stress state"),
-    BASELINE("a baseline"),
-    CASE("a load case"),
-    COMBINATION("a load combination"),
-    SERIES("a measured series"),
-    VALUE("a value"),
-    FUNCTION("a function");
+    MATERIAL("a material", "material"),
+    GAUGE("a gauge", "gauge"),
+    ROSETTE("a rosette", "rosette"),
+    STRAIN_STATE("a strain state", "strain"),
+    STRESS_STATE("a stress state", "stress"),
+    BASELINE("a baseline", "baseline"),
+    CASE("a load case", "case"),
+    COMBINATION("a load combination", "combine"),
+    SERIES("a measured series", "series"),
+    VALUE("a value", "let"),
+    FUNCTION("a function", "let");
 
     private final String described;
+    private final String keyword;
 
-    SymbolKind(String described) {
+    SymbolKind(String described, String keyword) {
         this.described = described;
+        this.keyword = keyword;
+    }
+
+    /** The keyword that declares it: "rosette", "strain", "let". */
+    public String keyword() {
+        return keyword;
     }
 
     /** "a rosette", for messages. */

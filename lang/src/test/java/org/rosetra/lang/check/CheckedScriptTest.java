@@ -144,4 +144,13 @@ class CheckedScriptTest {
         ScriptChecker.checkExpression(survey.script(), wrong, diagnostics);
         assertEquals("did you mean 'web_top'?", diagnostics.sorted().get(0).hint());
     }
+
+    @Test
+    void membersThatNeedAMaterial() {
+        // LANGUAGE.md, "Strain and stress states": without a material only the strain (or stress) members exist.
+        String states = "strain a {\n  eps_x = 100 ue\n}\nstress b {\n  sigma_x = 10 MPa\n}\n";
+        check(states + "let x = a.eps_1 + b.sigma_1 ^ 0 * 0 + a.gamma_max\n").noErrors();
+        check(states + "let y = a.sigma_1\n").onlyError(7, 11, "a has no material, so it has no sigma_1");
+        check(states + "let z = b.eps_x\n").onlyError(7, 11, "b has no material, so it has no eps_x");
+    }
 }
