@@ -166,7 +166,7 @@ public final class Expressions {
                 throw new EvaluationException(at, "rosette " + r.name() + " has no material, so it has no " + name);
             }
             Frame f = scope.frame();
-            return new Value.History(f.series(), f.member(r.name(), member.get()), f.time(), d);
+            return new Value.History(f.series(), f.member(r.name(), member.get()), f.times(), d);
         }
         if (target instanceof Value.Rosette r) {
             double[] column = evaluation.results(r.name()).get(member.get());

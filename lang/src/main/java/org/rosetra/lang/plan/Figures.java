@@ -33,8 +33,18 @@ final class Figures {
     private Figures() {}
 
     static List<Output> of(Plot plot, Evaluation evaluation, DisplayUnits display, Function<SourceSpan, String> textOf) {
-        Value target = evaluation.expressions().evaluate(plot.target(), Map.of());
         String label = textOf.apply(plot.target().span());
+        List<Output> histories = new java.util.ArrayList<>();
+        for (SeriesEvaluation.Result series : evaluation.series().values()) {
+            Decimation d = series.plots().get(plot);
+            if (d != null) {
+                histories.add(history(plot, series, d, evaluation, display, label, textOf));
+            }
+        }
+        if (!histories.isEmpty()) {
+            return histories;
+        }
+        Value target = evaluation.expressions().evaluate(plot.target(), Map.of());
         return switch (plot.kind()) {
             case MOHR -> List.of(mohr(plot, target, evaluation, display, label));
             case DIRECTIONS -> List.of(directions(plot, target, evaluation, display, label));
@@ -141,6 +151,35 @@ final class Figures {
         }
         CaseBars bars = new CaseBars(label + " per case", evaluation.axis(), shown, label, u.symbol(), limit);
         return figure(plot, label + " per case", label, new CaseBarFigure(bars));
+    }
+
+    private static Output history(Plot plot, SeriesEvaluation.Result series, Decimation d, Evaluation evaluation,
+                                  DisplayUnits display, String label, Function<SourceSpan, String> textOf) {
+        Dimension dimension = plotDimension(plot, evaluation);
+        Unit u = dimension.isNone() ? Unit.ONE : display.unitFor(dimension);
+        double[][] points = d.points();
+        double[] shown = new double[points[1].length];
+        for (int i = 0; i < shown.length; i++) {
+            shown[i] = u.fromSi(points[1][i]);
+        }
+        String name = series.spec().name();
+        String shownLabel = label.endsWith("[" + name + "]") ? label.substring(0, label.length() - name.length() - 2) : label;
+        Optional<Limit> limit = limitFor(label, evaluation, u, textOf);
+        History history = new History(shownLabel + ", series " + name, points[0], shown, "s", shownLabel, u.symbol(), limit);
+        return figure(plot, shownLabel + " against time, series " + name, shownLabel + "-" + name, new HistoryFigure(history));
+    }
+
+    /** The dimension of a plotted member (the history itself is not kept). */
+    private static Dimension plotDimension(Plot plot, Evaluation evaluation) {
+        org.rosetra.lang.syntax.Expr e = plot.target();
+        while (e instanceof org.rosetra.lang.syntax.Index ix) {
+            e = ix.target();
+        }
+        if (e instanceof org.rosetra.lang.syntax.Member m) {
+            return org.rosetra.runtime.results.RosetteMember.byScriptName(m.member().text())
+                    .map(Expressions::dimensionOf).orElse(Dimension.NONE);
+        }
+        return Dimension.NONE;
     }
 
     /** A check on the same expression against a single number gives the plot its limit line. */

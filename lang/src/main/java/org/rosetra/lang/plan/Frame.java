@@ -20,7 +20,8 @@ public record Frame(String series, int n, double[] time, Map<String, ChainBuffer
         return Arrays.copyOf(buffers.member(member), n);
     }
 
-    double[] time() {
+    /** The chunk's times in seconds (a copy of the first {@code n}). */
+    double[] times() {
         return Arrays.copyOf(time, n);
     }
 

@@ -39,6 +39,7 @@ public final class Session {
     private final Map<String, List<Statement>> modules = new LinkedHashMap<>();
     private final Map<String, String> moduleFileNames = new HashMap<>();
     private boolean allowJava;
+    private org.rosetra.runtime.series.ReadOptions readOptions = org.rosetra.runtime.series.ReadOptions.defaults();
 
     private record Entry(String source, Statement statement) {}
 
@@ -56,6 +57,15 @@ public final class Session {
 
     public boolean javaAllowed() {
         return allowJava;
+    }
+
+    /** How measured series are read: threads, a cancel flag (for an interrupt), progress. */
+    public void readOptions(org.rosetra.runtime.series.ReadOptions options) {
+        this.readOptions = options;
+    }
+
+    public org.rosetra.runtime.series.ReadOptions readOptions() {
+        return readOptions;
     }
 
     /** The text of a file or cell the session has seen, for diagnostics (null if unknown). */
@@ -133,6 +143,7 @@ public final class Session {
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
+        evaluation.configureSeries(folder, readOptions);
         try {
             List<CheckResult> checks = new ArrayList<>();
             for (var check : program.checks()) {
@@ -144,6 +155,9 @@ public final class Session {
             return new Outcome(diagnostics, results, outputs, checks, evaluation, builder.display());
         } catch (EvaluationException e) {
             diagnostics.error(e.span(), e.getMessage(), e.hint());
+        } catch (org.rosetra.runtime.series.SeriesDataException e) {
+            diagnostics.error(new org.rosetra.lang.syntax.SourceSpan(e.shownName(), (int) e.line(), 0, (int) e.line(), 0),
+                    (e.column() != null ? "column \"" + e.column() + "\": " : "") + e.problem(), null);
         } catch (Evaluation.CycleException e) {
             diagnostics.error(all.get(0).span(), e.getMessage());
         }
