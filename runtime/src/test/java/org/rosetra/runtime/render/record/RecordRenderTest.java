@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 
 class RecordRenderTest {
 
-  private static final Record record = RecordSamples.survey(true); // rendered once: figures are slow-ish
+  private static final CalculationRecord record = RecordSamples.survey(true); // rendered once: figures are slow-ish
 
   @Test
   void renderingTwiceGivesTheSameText() {
