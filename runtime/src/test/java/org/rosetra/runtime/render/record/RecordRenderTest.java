@@ -56,6 +56,23 @@ class RecordRenderTest {
   }
 
   @Test
+  void inlineFiguresStayWellFormed() throws Exception {
+    String html = HtmlRecord.render(record);
+    Matcher svg = Pattern.compile("(?s)<svg role=\"img\".*?</svg>").matcher(html);
+    int figures = 0;
+    while (svg.find()) {
+      figures++;
+      // XML 1.0 well-formedness through the JDK's parser; no DTD, no outside entity is read.
+      var factory = javax.xml.parsers.DocumentBuilderFactory.newInstance();
+      factory.setFeature("http://apache.org/xml/features/disallow-doctype-decl", true);
+      var doc = factory.newDocumentBuilder()
+          .parse(new java.io.ByteArrayInputStream(svg.group().getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+      assertEquals("svg", doc.getDocumentElement().getTagName());
+    }
+    assertEquals(3, figures);
+  }
+
+  @Test
   void theRecordFollowsItsOrderAndCarriesTheCaution() {
     String html = HtmlRecord.render(record);
     String[] order = {
