@@ -19,6 +19,10 @@ public final class KernelCommand implements Callable<Integer> {
             description = "The connection file written by the notebook front end.")
     private Path connectionFile;
 
+    @Option(names = "--no-warm-up",
+            description = "Start serving at once; the first cells are then slower.")
+    private boolean noWarmUp;
+
     private Supplier<? extends CellEngine> engines;
 
     /** For picocli's default factory; call {@link #useEngines} before running. */
@@ -54,7 +58,8 @@ public final class KernelCommand implements Callable<Integer> {
             System.err.println("rosetra kernel: cannot use connection file: " + e.getMessage());
             return 2;
         }
-        new Kernel(connection, engines.get(), System.err).run();
+        Kernel kernel = new Kernel(connection, engines.get(), System.err);
+        (noWarmUp ? kernel.withoutWarmUp() : kernel).run();
         return 0;
     }
 }

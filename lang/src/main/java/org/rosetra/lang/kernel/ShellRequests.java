@@ -2,10 +2,9 @@ package org.rosetra.lang.kernel;
 
 import java.io.PrintStream;
 import java.util.List;
-import java.util.concurrent.atomic.AtomicLong;
 
 /**
- * Answers shell requests, one at a time on the worker thread, by asking the engine
+ * Answers shell requests, one at a time on the shell thread, by asking the engine
  * (Jupyter messaging protocol 5.3, "Messages on the shell (ROUTER/DEALER) channel"). Every
  * request is wrapped in status busy ... idle on IOPub.
  */
@@ -13,34 +12,30 @@ final class ShellRequests {
     private final CellEngine engine;
     private final String implementationVersion;
     private final String languageVersion;
-    private final AtomicLong lastArrival;
     private final PrintStream log;
-    private final Runnable stopKernel;
 
     private volatile boolean cellRunning;
     private int executionCount;
-    /** After a failed cell, execute requests that had arrived by then are aborted. */
-    private long abortThrough = -1;
 
     ShellRequests(CellEngine engine, String implementationVersion, String languageVersion,
-            AtomicLong lastArrival, PrintStream log, Runnable stopKernel) {
+            PrintStream log) {
         this.engine = engine;
         this.implementationVersion = implementationVersion;
         this.languageVersion = languageVersion;
-        this.lastArrival = lastArrival;
         this.log = log;
-        this.stopKernel = stopKernel;
     }
 
     boolean isCellRunning() {
         return cellRunning;
     }
 
-    void handle(Request request, MessageOut out) {
+    /** Answers {@code request}; true when it was a cell that failed and asks to stop on error. */
+    boolean handle(Request request, MessageOut out) {
+        boolean failedCell = false;
         out.status(request, "busy");
         try {
             switch (request.type()) {
-                case "execute_request" -> execute(request, out);
+                case "execute_request" -> failedCell = execute(request, out);
                 case "kernel_info_request" -> out.reply(request, "kernel_info_reply",
                         KernelInfo.content(implementationVersion, languageVersion));
                 case "complete_request" -> complete(request, out);
@@ -66,23 +61,25 @@ final class ShellRequests {
         } finally {
             out.status(request, "idle");
         }
-        if (request.type().equals("shutdown_request")) {
-            stopKernel.run(); // after idle, so front ends see the request finish
-        }
+        return failedCell;
     }
 
-    private void execute(Request request, MessageOut out) {
+    /** Declines a cell queued behind a failed one. */
+    void abort(Request request, MessageOut out) {
+        out.status(request, "busy");
+        int count = executionCount;
+        out.reply(request, "execute_reply", json -> {
+            json.writeStringField("status", "aborted");
+            json.writeNumberField("execution_count", count);
+        });
+        out.status(request, "idle");
+    }
+
+    private boolean execute(Request request, MessageOut out) {
         JsonFields content = request.content();
         String code = content.text("code", "");
         boolean silent = content.flag("silent", false);
         boolean storeHistory = !silent && content.flag("store_history", true);
-        if (request.sequence() <= abortThrough) {
-            out.reply(request, "execute_reply", json -> {
-                json.writeStringField("status", "aborted");
-                json.writeNumberField("execution_count", executionCount);
-            });
-            return;
-        }
         if (storeHistory) {
             executionCount++;
         }
@@ -110,19 +107,19 @@ final class ShellRequests {
                 json.writeArrayFieldStart("payload");
                 json.writeEndArray();
             });
+            return false;
         } else if (outcome instanceof CellOutcome.Failure failure) {
             if (!silent) {
                 out.publish(request, "error", json -> writeFailure(json, failure));
-            }
-            if (content.flag("stop_on_error", true)) {
-                abortThrough = lastArrival.get();
             }
             out.reply(request, "execute_reply", json -> {
                 json.writeStringField("status", "error");
                 json.writeNumberField("execution_count", count);
                 writeFailure(json, failure);
             });
+            return content.flag("stop_on_error", true);
         }
+        throw new IllegalStateException("unknown outcome " + outcome);
     }
 
     private CellOutcome run(String code, OutputSink sink) {

@@ -48,7 +48,7 @@ final class WireFormat {
             String type = headerFields.text("msg_type")
                     .orElseThrow(() -> new RejectedMessage("header has no msg_type"));
             return new Request(frames.subList(0, delimiter), header, type,
-                    JsonFields.parse(content), 0);
+                    JsonFields.parse(content));
         } catch (IOException e) {
             throw new RejectedMessage("not JSON: " + e.getMessage(), e);
         }

@@ -35,7 +35,7 @@ class KernelCommandTest {
         assertEquals(2, new CommandLine(new KernelCommand(FakeEngine::new))
                 .execute("--connection-file", folder.resolve("missing.json").toString()));
         Path file = RunningKernel.writeConnectionFile(folder);
-        assertEquals(1, new CommandLine(new KernelCommand()).execute("--connection-file", file.toString()));
+        assertEquals(1, new CommandLine(new KernelCommand()).execute("--no-warm-up", "--connection-file", file.toString()));
     }
 
     @Test
@@ -44,7 +44,7 @@ class KernelCommandTest {
         Path file = RunningKernel.writeConnectionFile(folder);
         int[] exit = {-1};
         Thread kernel = new Thread(() -> exit[0] = new CommandLine(new KernelCommand(FakeEngine::new))
-                .execute("--connection-file", file.toString()));
+                .execute("--no-warm-up", "--connection-file", file.toString()));
         kernel.start();
         PythonClient.Result result = PythonClient.run("shutdown.py", file.toString());
         assertEquals(0, result.exitCode(), result.output());

@@ -21,7 +21,7 @@ final class RunningKernel implements AutoCloseable {
     RunningKernel(Path folder) throws IOException, InterruptedException {
         connectionFile = writeConnectionFile(folder);
         PrintStream log = new PrintStream(logBytes, true, StandardCharsets.UTF_8);
-        kernel = new Kernel(ConnectionInfo.read(connectionFile), new FakeEngine(), log);
+        kernel = new Kernel(ConnectionInfo.read(connectionFile), new FakeEngine(), log).withoutWarmUp();
         thread = new Thread(() -> {
             try {
                 kernel.run();
@@ -46,9 +46,13 @@ final class RunningKernel implements AutoCloseable {
     }
 
     @Override
-    public void close() throws InterruptedException {
+    public void close() {
         kernel.stop();
-        thread.join(10_000);
+        try {
+            thread.join(10_000);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     static Path writeConnectionFile(Path folder) throws IOException {
