@@ -32,23 +32,16 @@ class NotebookTest {
     @Test
     void runsANotebookOnTheFakeEngine() throws Exception {
         PythonClient.require("jupyter_client", "nbclient", "nbformat");
-        Map<String, String> environment = jupyterFolders();
-        // A kernelspec that starts this build's kernel on the fake engine.
-        List<String> argv = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-cp", System.getProperty("java.class.path"), FakeKernelMain.class.getName(),
-                "--no-warm-up", "--connection-file", "{connection_file}");
-        JsonContent spec = json -> {
-            JsonContent.writeStrings(json, "argv", argv);
-            json.writeStringField("display_name", "Rosetra (fake engine)");
-            json.writeStringField("language", "rosetra");
-            json.writeStringField("interrupt_mode", "message");
-        };
-        Path specFolder = Files.createDirectories(
-                Path.of(environment.get("JUPYTER_DATA_DIR"), "kernels", "rosetra-fake"));
-        Files.write(specFolder.resolve("kernel.json"), spec.toBytes());
+        PythonClient.Result result = PythonClient.run("run_notebook.py", FakeKernelSpec.install(folder),
+                "--fake-engine", folder.toString(), FakeKernelSpec.NAME);
+        assertEquals(0, result.exitCode(), result.output());
+    }
 
-        PythonClient.Result result = PythonClient.run("run_notebook.py", environment,
-                "--fake-engine", folder.toString(), "rosetra-fake");
+    @Test
+    void interruptsAndShutsDownThroughAKernelManager() throws Exception {
+        PythonClient.require("jupyter_client");
+        PythonClient.Result result = PythonClient.run("kernel_manager.py", FakeKernelSpec.install(folder),
+                FakeKernelSpec.NAME);
         assertEquals(0, result.exitCode(), result.output());
     }
 
