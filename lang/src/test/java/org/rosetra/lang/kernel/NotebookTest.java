@@ -46,15 +46,23 @@ class NotebookTest {
     }
 
     @Test
-    @EnabledIfSystemProperty(named = "rosetra.kernel.notebooks", matches = "true",
-            disabledReason = "enabled when the language is wired: -Drosetra.kernel.notebooks=true")
     void runsTheExampleNotebooks() throws Exception {
         PythonClient.require("jupyter_client", "nbclient", "nbformat");
         Path examples = Path.of(System.getProperty("rosetra.examples", "../examples"), "notebook");
         Assumptions.assumeTrue(Files.isDirectory(examples), "no " + examples);
         Map<String, String> environment = jupyterFolders();
-        new KernelSpec(Launcher.locate())
-                .installInto(Path.of(environment.get("JUPYTER_DATA_DIR"), "kernels"));
+        // The real kernel of this build, started from the test classes (the jar is made later).
+        List<String> argv = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), "org.rosetra.lang.cli.Main",
+                "kernel", "--no-warm-up", "--connection-file", "{connection_file}");
+        JsonContent spec = json -> {
+            JsonContent.writeStrings(json, "argv", argv);
+            json.writeStringField("display_name", "Rosetra (this build)");
+            json.writeStringField("language", "rosetra");
+            json.writeStringField("interrupt_mode", "message");
+        };
+        Path specFolder = Files.createDirectories(Path.of(environment.get("JUPYTER_DATA_DIR"), "kernels", KernelSpec.NAME));
+        Files.write(specFolder.resolve("kernel.json"), spec.toBytes());
         List<Path> notebooks;
         try (Stream<Path> files = Files.list(examples)) {
             notebooks = files.filter(file -> file.toString().endsWith(".ipynb")).sorted().toList();
