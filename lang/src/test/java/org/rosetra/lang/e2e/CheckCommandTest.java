@@ -50,15 +50,20 @@ class CheckCommandTest {
                 """).expectStatus(0);
     }
 
-    @Disabled("BUG: rosetra check reports only syntax errors; every name, dimension and reading error exits 0")
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {
         "field-dimension", "field-dimension-angle", "unknown-name", "unknown-member", "reading-count",
         "baseline-missing-rosette", "trig-of-number", "unlike-sum", "missing-strength",
-        "missing-strength-check", "unused-field-dimension", "missing-baseline", "duplicate-name",
+        "missing-strength-check", "unused-field-dimension", "missing-baseline",
         "undeclared-rosette", "unknown-gauge", "unlike-comparison",
     })
     void checkerErrorsAreReported(String name) {
         checkScript(name);
+    }
+
+    @Disabled("BUG: a second 'gauge foil' in one script is accepted by check (exit 0)")
+    @Test
+    void duplicateName() {
+        checkScript("duplicate-name");
     }
 }

@@ -7,7 +7,6 @@ import static org.rosetra.lang.e2e.ScriptRun.script;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -91,7 +90,6 @@ class MaterialConstantsTest {
         assertTrue(!Files.exists(run.json), "nothing written");
     }
 
-    @Disabled("BUG: nu out of range is reported at the material's name (1:10), not at the nu value (3:8)")
     @ParameterizedTest(name = "nu = {0}")
     @ValueSource(strings = {"0.5", "0.7", "-1", "-1.5"})
     void poissonsRatioOutsideItsRangeIsAnErrorAtTheValue(String nu) {
@@ -100,7 +98,6 @@ class MaterialConstantsTest {
         assertTrue(run.firstErrorLine().startsWith(run.script + ":3:8: error: "), run.err);
     }
 
-    @Disabled("BUG: nu = 0.5 in a material no rosette or state uses is not an error (run and check exit 0)")
     @Test
     void poissonsRatioOutOfRangeIsAnErrorEvenInAnUnusedMaterial() {
         String text = """

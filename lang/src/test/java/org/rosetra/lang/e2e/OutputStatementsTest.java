@@ -9,7 +9,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -69,12 +68,23 @@ class OutputStatementsTest {
     @Test
     void everyOutputFormRunsAndTablesAreWritten() throws IOException {
         ScriptRun run = ScriptRun.run(dir, SURVEY).ok();
-        List<String> tables = files(run.outDir.resolve("tables"));
-        assertEquals(2, tables.size(), tables::toString);
+        Path folder = run.outDir.resolve("tables");
+        List<List<String>> tables = new java.util.ArrayList<>();
+        for (String name : files(folder)) {
+            tables.add(Files.readAllLines(folder.resolve(name), StandardCharsets.UTF_8));
+        }
+        // the standard table of r: every member of "Results of a rosette", one row per case
+        String headers = String.join(",", tables.stream().map(t -> t.get(0)).toList());
+        for (String m : List.of("eps_x", "eps_y", "gamma_xy", "eps_1", "eps_2", "theta_p", "gamma_max", "eps_z",
+                "sigma_x", "sigma_y", "tau_xy", "sigma_1", "sigma_2", "sigma_z", "tau_max", "tau_abs", "von_mises",
+                "tresca")) {
+            assertTrue(headers.contains(m + " ["), () -> m + " in a table header: " + headers);
+        }
         // the chosen columns, one row per case, in display units (MPa)
-        List<String> rows = Files.readAllLines(run.outDir.resolve("tables").resolve(tables.get(1)), StandardCharsets.UTF_8);
+        List<String> rows = tables.stream().filter(t -> t.get(0).contains("r.sigma_1")).findFirst()
+                .orElseThrow(() -> new AssertionError("a table of r.sigma_1: " + headers));
         assertEquals(3, rows.size(), rows::toString);
-        assertTrue(rows.get(0).contains("r.sigma_1") && rows.get(0).contains("r.von_mises"), rows.get(0));
+        assertTrue(rows.get(0).contains("r.von_mises"), rows.get(0));
         // c1: eps_x 100, eps_y 20, gamma 2*50 - 100 - 20 = -20 ue (rectangular, textbook);
         // plane stress Hooke (textbook), principal stress by Mohr's circle
         double ex = 100e-6;
@@ -87,13 +97,8 @@ class OutputStatementsTest {
         String[] c1 = rows.get(1).split(",");
         assertEquals("c1", c1[0]);
         assertEquals(s1 / 1e6, Double.parseDouble(c1[1]), 0.01, "sigma_1 in MPa, rounded for display");
-        // the standard table: one row per case, every member
-        List<String> standard = Files.readAllLines(run.outDir.resolve("tables").resolve(tables.get(0)), StandardCharsets.UTF_8);
-        assertEquals(3, standard.size(), standard::toString);
-        assertEquals(19, standard.get(0).split(",").length, standard.get(0));
     }
 
-    @Disabled("BUG: plot statements write no plots/*.svg or *.png into the output folder")
     @Test
     void plotsAreWritten() throws IOException {
         ScriptRun run = ScriptRun.run(dir, SURVEY).ok();
@@ -103,7 +108,6 @@ class OutputStatementsTest {
         assertEquals(5, plots.stream().filter(p -> p.endsWith(".png")).count(), plots::toString);
     }
 
-    @Disabled("BUG: no calculation record (record.md, record.html) is written into the output folder")
     @Test
     void theRecordIsWritten() throws IOException {
         ScriptRun run = ScriptRun.run(dir, SURVEY).ok();
