@@ -120,4 +120,20 @@ class ChecksTest {
         assertEquals((K * 100e-6) / (2 * K * 200e-6), (Double) run.check("pair").get("utilization"), 1e-12);
         assertEquals("light", run.check("pair").get("governing"));
     }
+
+    @Test
+    void aCombinationIsACaseForTheChecksAndReductions() {
+        ScriptRun run = run("""
+                combine overload = 1.2 * heavy + 0.5 * middle
+                let peak_q    = max(q.von_mises)
+                let over_s1   = r.sigma_1[overload]
+                check "overload": r.von_mises <= 250 MPa
+                """).expectStatus(0);
+        // superposed strain 1.2 * 600 + 0.5 * 300 = 870 ue equal biaxial: E e / (1 - nu) (textbook)
+        assertEquals(K * 870e-6, run.number("over_s1"), 1e-3);
+        assertEquals(K * 870e-6 / 250e6, (Double) run.check("overload").get("utilization"), 1e-12);
+        assertEquals("overload", run.check("overload").get("governing"));
+        // q was read in light only, so max over the cases is its value there (LANGUAGE.md: no result, not zero)
+        assertEquals(K * 200e-6, run.number("peak_q"), 1e-3);
+    }
 }

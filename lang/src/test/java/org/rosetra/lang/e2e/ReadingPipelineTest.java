@@ -287,6 +287,43 @@ class ReadingPipelineTest {
         assertEquals(state.getEntry(2), run.member("r", "proof", "gamma_xy"), STRAIN);
     }
 
+    @Test
+    void transverseSensitivityInALeastSquaresSolve() {
+        ScriptRun run = ScriptRun.run(dir, MATERIAL + """
+                gauge embed {
+                  factor     = 2.10
+                  transverse = 1 %
+                }
+                rosette r {
+                  layout = arms(0 deg, 45 deg, 90 deg, 135 deg)
+                  gauge = embed
+                  material = steel
+                  angle = 90 deg
+                }
+                case fill {
+                  r = -91, -29, 74, 5 ue
+                }
+                """).ok();
+        // LANGUAGE.md, step 4 with nu0 = 0.285 (default): the four-arm model, arms at 90 + t_i in the
+        // part's axes, fitted by least squares with Commons Math (QR decomposition)
+        double kt = 0.01;
+        double[] readings = {-91e-6, -29e-6, 74e-6, 5e-6};
+        double[][] model = new double[4][];
+        for (int i = 0; i < 4; i++) {
+            double t = Math.toRadians(90 + 45 * i);
+            double u = t + Math.PI / 2;
+            model[i] = new double[] {
+                (sq(Math.cos(t)) + kt * sq(Math.cos(u))) / (1 - 0.285 * kt),
+                (sq(Math.sin(t)) + kt * sq(Math.sin(u))) / (1 - 0.285 * kt),
+                (Math.sin(t) * Math.cos(t) + kt * Math.sin(u) * Math.cos(u)) / (1 - 0.285 * kt)};
+        }
+        RealVector fit = new org.apache.commons.math3.linear.QRDecomposition(new Array2DRowRealMatrix(model))
+                .getSolver().solve(new ArrayRealVector(readings));
+        assertEquals(fit.getEntry(0), run.member("r", "fill", "eps_x"), STRAIN);
+        assertEquals(fit.getEntry(1), run.member("r", "fill", "eps_y"), STRAIN);
+        assertEquals(fit.getEntry(2), run.member("r", "fill", "gamma_xy"), STRAIN);
+    }
+
     private static double sq(double x) {
         return x * x;
     }
