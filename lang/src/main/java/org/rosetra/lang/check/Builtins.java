@@ -157,7 +157,9 @@ public final class Builtins {
                 FieldSpec.quantity("yield_c", STRESS, Limits.POSITIVE, "yield strength in compression (default: yield)"),
                 FieldSpec.quantity("ultimate", STRESS, Limits.POSITIVE, "ultimate strength in tension"),
                 FieldSpec.quantity("ultimate_c", STRESS, Limits.POSITIVE,
-                        "ultimate strength in compression (default: ultimate)")));
+                        "ultimate strength in compression (default: ultimate)"),
+                FieldSpec.of("source", FieldKind.TEXT, null,
+                        "where the values come from (standard, certificate, test), shown in the record")));
         all.put(BlockKind.GAUGE, byName(
                 FieldSpec.quantity("factor", NONE, Limits.POSITIVE, "gauge factor").asRequired(),
                 FieldSpec.quantity("transverse", NONE, null, "transverse sensitivity coefficient Kt (default 0)"),

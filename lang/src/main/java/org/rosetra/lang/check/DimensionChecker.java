@@ -136,8 +136,12 @@ public final class DimensionChecker {
             case TEXT -> {
                 if (!(value instanceof StringLit text)) {
                     error(value.span(), "field " + spec.name() + " of " + owner + " is a string", null);
-                } else if (text.value().length() != 1) {
-                    error(value.span(), "field " + spec.name() + " of " + owner + " is one character", null);
+                } else if (spec.name().equals("source")) {
+                    // Free text for the record.
+                } else if (text.value().length() != 1 && !(spec.name().equals("delimiter")
+                        && (text.value().equals("tab") || text.value().equals("\\t")))) {
+                    error(value.span(), "field " + spec.name() + " of " + owner + " is one character",
+                            spec.name().equals("delimiter") ? "use \",\", \";\" or \"tab\"" : null);
                 } else if (spec.name().equals("decimal") && !text.value().equals(".") && !text.value().equals(",")) {
                     error(value.span(), "the decimal mark is \".\" or \",\"", null);
                 }

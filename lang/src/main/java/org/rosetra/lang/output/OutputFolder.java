@@ -5,7 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Map;
-import org.rosetra.runtime.render.record.Record;
+import org.rosetra.runtime.render.record.CalculationRecord;
 import org.rosetra.runtime.render.record.RecordFolder;
 
 /**
@@ -16,7 +16,7 @@ import org.rosetra.runtime.render.record.RecordFolder;
 public final class OutputFolder {
     private OutputFolder() {}
 
-    public static void write(Path folder, Record record, byte[] resultsJson) throws IOException {
+    public static void write(Path folder, CalculationRecord record, byte[] resultsJson) throws IOException {
         RecordFolder.write(folder, record, Map.of("results.json", resultsJson));
     }
 

@@ -22,8 +22,13 @@ import org.rosetra.runtime.render.record.ArmCorrection;
 import org.rosetra.runtime.render.record.CheckLine;
 import org.rosetra.runtime.render.record.InputFile;
 import org.rosetra.runtime.render.record.Property;
-import org.rosetra.runtime.render.record.Record;
+import org.rosetra.runtime.render.record.CalculationRecord;
 import org.rosetra.runtime.render.record.RecordItem;
+import org.rosetra.runtime.render.record.SeriesInput;
+import org.rosetra.runtime.render.table.Cell;
+import org.rosetra.runtime.render.table.Column;
+import org.rosetra.runtime.render.table.ResultTable;
+import org.rosetra.runtime.render.table.Row;
 import org.rosetra.runtime.units.Dimension;
 import org.rosetra.runtime.units.DisplayUnits;
 import org.rosetra.runtime.units.Unit;
@@ -38,7 +43,7 @@ public final class RecordBuilder {
      * @param scriptName the script's file name as the record shows it
      * @param inputs     every input file (the script first) with its digest
      */
-    public static Record build(String scriptName, String scriptText, Outcome outcome, Session session,
+    public static CalculationRecord build(String scriptName, String scriptText, Outcome outcome, Session session,
                                List<InputFile> inputs, String toolVersion) {
         Evaluation evaluation = outcome.evaluation();
         DisplayUnits display = outcome.display();
@@ -81,8 +86,43 @@ public final class RecordBuilder {
                 }
             }
         }
-        return new Record(title, checks, declarations, strain.symbol(), corrections, items, List.of(),
-                scriptName, scriptText, inputs, toolVersion);
+        List<SeriesInput> series = new ArrayList<>();
+        List<InputFile> allInputs = new ArrayList<>(inputs);
+        List<Row> flagged = new ArrayList<>();
+        for (var e : evaluation.series().entrySet()) {
+            var r = e.getValue();
+            String digest;
+            try {
+                digest = Sha256.ofFile(r.spec().file());
+            } catch (IOException x) {
+                throw new java.io.UncheckedIOException(x);
+            }
+            series.add(new SeriesInput(e.getKey(), r.spec().shownName(), digest, r.samples(), r.firstTime(),
+                    r.lastTime(), "s", r.spec().zeroText()));
+            allInputs.add(new InputFile(r.spec().shownName(), digest));
+            for (var f : r.flags().entrySet()) {
+                List<String> columns = r.spec().rosettes().get(f.getKey());
+                for (int a = 0; a < f.getValue().length; a++) {
+                    var flag = f.getValue()[a];
+                    if (flag.raised()) {
+                        flagged.add(new Row(e.getKey() + " / " + f.getKey() + " arm " + ARMS.charAt(a)
+                                + " (\"" + columns.get(a) + "\")", List.of(Cell.of(flag.count()),
+                                Cell.of(strain.fromSi(flag.worst())), Cell.of(flag.timeOfWorst()),
+                                Cell.of(flag.firstTime()), Cell.of(flag.lastTime()))));
+                    }
+                }
+            }
+        }
+        if (!flagged.isEmpty()) {
+            ResultTable table = new ResultTable("Readings beyond a plausible range (over "
+                    + Math.round(strain.fromSi(org.rosetra.lang.plan.SeriesLimits.PLAUSIBLE_STRAIN))
+                    + " " + strain.symbol() + "): likely a debonded or saturated gauge", "series / arm",
+                    List.of(Column.unitless("readings"), new Column("worst", strain.symbol()),
+                            new Column("at", "s"), new Column("first", "s"), new Column("last", "s")), flagged);
+            items.add(new RecordItem.TableItem(unique("implausible-readings", used), table));
+        }
+        return new CalculationRecord(title, checks, declarations, strain.symbol(), corrections, items, series,
+                scriptName, scriptText, allInputs, toolVersion);
     }
 
     private static org.rosetra.runtime.render.record.Declaration declaration(Declaration d, Evaluation evaluation,

@@ -7,7 +7,7 @@ import java.util.Arrays;
  * each block of consecutive samples, with their times. Blocks double in size as the history
  * grows, so memory stays bounded while every peak and trough survives.
  */
-final class Decimation {
+public final class Decimation {
     /** Blocks kept before neighbours are merged two by two. */
     private static final int MAX_BLOCKS = 8192;
 

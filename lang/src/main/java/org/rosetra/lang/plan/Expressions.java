@@ -281,6 +281,13 @@ public final class Expressions {
 
     private Value call(Call c, Scope params) {
         String f = c.function().text();
+        if ((f.equals("max") || f.equals("min")) && params.frame() == null) {
+            // max(x[series]) was reduced during the series' pass.
+            Value reduced = evaluation.seriesReduction(c);
+            if (reduced != null) {
+                return reduced;
+            }
+        }
         List<Value> args = new ArrayList<>();
         for (Expr a : c.args()) {
             args.add(eval(a, params));
@@ -291,12 +298,6 @@ public final class Expressions {
                 return apply(function, args, c, params);
             }
             throw new EvaluationException(c.function().span(), "'" + f + "' is a value, not a function");
-        }
-        if ((f.equals("max") || f.equals("min")) && params.frame() == null) {
-            Value reduced = evaluation.seriesReduction(c);
-            if (reduced != null) {
-                return reduced;
-            }
         }
         switch (f) {
             case "sqrt": return Arithmetic.sqrt(one(c, args), c.span());

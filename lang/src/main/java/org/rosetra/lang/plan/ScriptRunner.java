@@ -13,7 +13,7 @@ import java.util.List;
 import org.rosetra.lang.output.OutputFolder;
 import org.rosetra.lang.output.RecordBuilder;
 import org.rosetra.runtime.render.record.InputFile;
-import org.rosetra.runtime.render.record.Record;
+import org.rosetra.runtime.render.record.CalculationRecord;
 import org.rosetra.lang.output.ResultsJson;
 import org.rosetra.runtime.render.table.PlainTextTable;
 
@@ -57,6 +57,9 @@ public final class ScriptRunner {
             return ERROR;
         }
         loaded.session.allowJava(options.allowJava());
+        if (System.console() != null) {
+            loaded.session.progressTo(err);
+        }
         Diagnostics diagnostics = new Diagnostics();
         loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
         Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
@@ -78,7 +81,7 @@ public final class ScriptRunner {
                 List<InputFile> inputs = new ArrayList<>();
                 inputs.add(RecordBuilder.input(script.getFileName().toString(), loaded.text));
                 loaded.session.moduleSources().forEach((name, text) -> inputs.add(RecordBuilder.input(name, text)));
-                Record record = RecordBuilder.build(script.getFileName().toString(), loaded.text, outcome,
+                CalculationRecord record = RecordBuilder.build(script.getFileName().toString(), loaded.text, outcome,
                         loaded.session, inputs, toolVersion);
                 OutputFolder.write(folder, record, json);
             }

@@ -34,9 +34,9 @@ import org.rosetra.runtime.units.Dimension;
  * histories that plots draw. Parts of the file are folded on their own threads and merged in
  * file order, so the result does not depend on the number of threads.
  */
-final class SeriesEvaluation {
+public final class SeriesEvaluation {
     /** A reading beyond this many microstrain is flagged as a likely debonded or saturated gauge. */
-    static final double PLAUSIBLE_STRAIN = 50_000e-6;
+    static final double PLAUSIBLE_STRAIN = SeriesLimits.PLAUSIBLE_STRAIN;
 
     private final SeriesSpec spec;
     private final Evaluation evaluation;
@@ -78,13 +78,13 @@ final class SeriesEvaluation {
     }
 
     /** What one pass over the series found. */
-    record Result(SeriesSpec spec, long samples, double firstTime, double lastTime,
+    public record Result(SeriesSpec spec, long samples, double firstTime, double lastTime,
                   Map<String, Map<RosetteMember, Extremes>> extremes, Map<String, PlausibilityFlag[]> flags,
                   Map<Check, ProbeResult> checks, Map<Call, Value.Number> reductions,
                   Map<Plot, Decimation> plots, Map<String, double[]> zero) {}
 
     /** A check over the samples: highest utilization, the time of it, whether every sample passed. */
-    record ProbeResult(boolean defined, boolean pass, double highest, double time, boolean unbounded) {}
+    public record ProbeResult(boolean defined, boolean pass, double highest, double time, boolean unbounded) {}
 
     Result run(ReadOptions options) {
         Map<String, double[]> zero = zeroReadings(options);

@@ -28,7 +28,7 @@ import org.rosetra.runtime.units.UnitParser;
  * @param zeroFrom      start of the zero window in seconds, or NaN
  * @param zeroBaseline  the baseline that zeroes the readings, or null
  */
-record SeriesSpec(String name, Series statement, Path file, String shownName, char delimiter, char decimal,
+public record SeriesSpec(String name, Series statement, Path file, String shownName, char delimiter, char decimal,
                   String timeColumn, double timeScale, Map<String, List<String>> rosettes,
                   Map<String, Double> strainScale, String temperatureColumn, Unit temperature,
                   double zeroFrom, double zeroTo, String zeroBaseline, SourceSpan zeroSpan) {
@@ -137,7 +137,7 @@ record SeriesSpec(String name, Series statement, Path file, String shownName, ch
     }
 
     /** How the record describes the zero. */
-    String zeroText() {
+    public String zeroText() {
         if (hasZeroWindow()) {
             return String.format(java.util.Locale.ROOT, "mean of %g s to %g s", zeroFrom, zeroTo);
         }

@@ -59,6 +59,13 @@ public final class Session {
         return allowJava;
     }
 
+    private java.io.PrintStream progressOut;
+
+    /** Draws a progress bar of long series reads here (a terminal's stderr), or nowhere (null). */
+    public void progressTo(java.io.PrintStream out) {
+        this.progressOut = out;
+    }
+
     /** How measured series are read: threads, a cancel flag (for an interrupt), progress. */
     public void readOptions(org.rosetra.runtime.series.ReadOptions options) {
         this.readOptions = options;
@@ -143,7 +150,7 @@ public final class Session {
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
-        evaluation.configureSeries(folder, readOptions);
+        evaluation.configureSeries(folder, readOptions, progressOut);
         try {
             List<CheckResult> checks = new ArrayList<>();
             for (var check : program.checks()) {

@@ -61,6 +61,9 @@ public final class CaseBarFigure implements Figure {
     PlotLook.apply(c.getStyler());
     c.getStyler().setLegendVisible(false);
     c.getStyler().setAvailableSpaceFill(0.55);
+    if (b.cases().size() > 6) {
+      c.getStyler().setXAxisLabelRotation(40); // many case names would overlap side by side
+    }
     c.setCustomYAxisTickLabelsFormatter(TickLabels::of);
     List<Double> values = new ArrayList<>();
     double lo = 0;

@@ -1,20 +1,28 @@
 package org.rosetra.runtime.render.plot;
 
 import java.awt.Color;
+import java.awt.Font;
 import java.awt.Graphics2D;
+import java.awt.font.FontRenderContext;
 import java.awt.font.TextLayout;
 import java.awt.geom.AffineTransform;
+import java.util.ArrayList;
 import java.util.List;
 import org.knowm.xchart.internal.chartpart.Chart;
 
 /**
- * One or more charts side by side, each in a panel of the same size, with an optional one-line
- * note under them. Our own small layout, since XChart paints one chart per canvas.
+ * One or more charts side by side, each in a panel of the same size, with an optional note
+ * under them, wrapped to the width. Our own small layout, since XChart paints one chart per canvas.
  */
 public record ChartRow(List<Chart<?, ?>> charts, int panelWidth, int panelHeight, String note)
     implements Painting {
 
-  static final int NOTE_HEIGHT = 22;
+  static final int NOTE_LINE = 16;
+  static final int NOTE_PAD = 8;
+  static final int NOTE_MARGIN = 12;
+
+  /** A fixed context for measuring the note, so line breaks never depend on the canvas. */
+  private static final FontRenderContext MEASURE = new FontRenderContext(null, true, true);
 
   public ChartRow {
     charts = List.copyOf(charts);
@@ -24,6 +32,28 @@ public record ChartRow(List<Chart<?, ?>> charts, int panelWidth, int panelHeight
     note = note == null ? "" : note;
   }
 
+  /** The note broken at spaces into lines that fit the canvas width. */
+  List<String> noteLines() {
+    List<String> lines = new ArrayList<>();
+    if (note.isEmpty()) {
+      return lines;
+    }
+    Font font = PlotFont.ofSize(PlotLook.TICK_SIZE);
+    double room = width() - 2.0 * NOTE_MARGIN;
+    StringBuilder line = new StringBuilder();
+    for (String word : note.split(" ")) {
+      String candidate = line.length() == 0 ? word : line + " " + word;
+      if (line.length() > 0 && font.getStringBounds(candidate, MEASURE).getWidth() > room) {
+        lines.add(line.toString());
+        line = new StringBuilder(word);
+      } else {
+        line = new StringBuilder(candidate);
+      }
+    }
+    lines.add(line.toString());
+    return lines;
+  }
+
   @Override
   public int width() {
     return panelWidth * charts.size();
@@ -31,7 +61,8 @@ public record ChartRow(List<Chart<?, ?>> charts, int panelWidth, int panelHeight
 
   @Override
   public int height() {
-    return panelHeight + (note.isEmpty() ? 0 : NOTE_HEIGHT);
+    int lines = noteLines().size();
+    return panelHeight + (lines == 0 ? 0 : lines * NOTE_LINE + NOTE_PAD);
   }
 
   @Override
@@ -55,10 +86,15 @@ public record ChartRow(List<Chart<?, ?>> charts, int panelWidth, int panelHeight
 
   /** The note is drawn as glyph outlines, like XChart's own text, so no font travels in the SVG. */
   private void paintNote(Graphics2D g) {
-    TextLayout layout = new TextLayout(note, PlotFont.ofSize(PlotLook.TICK_SIZE), g.getFontRenderContext());
-    double x = 12;
-    double y = panelHeight + NOTE_HEIGHT - 8;
     g.setColor(PlotLook.MUTED);
-    g.fill(layout.getOutline(AffineTransform.getTranslateInstance(x, y)));
+    List<String> lines = noteLines();
+    for (int i = 0; i < lines.size(); i++) {
+      if (lines.get(i).isEmpty()) {
+        continue;
+      }
+      TextLayout layout = new TextLayout(lines.get(i), PlotFont.ofSize(PlotLook.TICK_SIZE), g.getFontRenderContext());
+      double y = panelHeight + (i + 1) * NOTE_LINE;
+      g.fill(layout.getOutline(AffineTransform.getTranslateInstance(NOTE_MARGIN, y)));
+    }
   }
 }

@@ -26,6 +26,10 @@ public final class DirectionFigure implements Figure {
     this.chart = build(curves);
   }
 
+  public DirectionCurves curves() {
+    return curves;
+  }
+
   public XYChart chart() {
     return chart;
   }

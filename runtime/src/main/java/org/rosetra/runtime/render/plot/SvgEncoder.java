@@ -39,7 +39,26 @@ public final class SvgEncoder {
       throw new UncheckedIOException(e); // an in-memory stream does not fail
     }
     String svg = out.toString(StandardCharsets.UTF_8);
-    return renumberClips(shortenDecimals(svg)).getBytes(StandardCharsets.UTF_8);
+    return renumberClips(shortenDecimals(asciiDigits(svg))).getBytes(StandardCharsets.UTF_8);
+  }
+
+  /**
+   * VectorGraphics2D writes colours with String.format in the default locale, which in a few
+   * locales uses other digits. Our SVG holds no text, only numbers, so mapping every decimal
+   * digit to ASCII is safe and makes the file independent of the locale.
+   */
+  static String asciiDigits(String svg) {
+    StringBuilder sb = null;
+    for (int i = 0; i < svg.length(); i++) {
+      char c = svg.charAt(i);
+      if (c > 127 && Character.isDigit(c)) {
+        if (sb == null) {
+          sb = new StringBuilder(svg);
+        }
+        sb.setCharAt(i, (char) ('0' + Character.digit(c, 10)));
+      }
+    }
+    return sb == null ? svg : sb.toString();
   }
 
   private static final Pattern CLIP_ID = Pattern.compile("id=\"(clip-?\\d+)\"");

@@ -13,7 +13,7 @@ public final class HtmlRecord {
 
   private HtmlRecord() {}
 
-  public static String render(Record r) {
+  public static String render(CalculationRecord r) {
     StringBuilder sb = new StringBuilder(1 << 16);
     sb.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
         .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")

@@ -11,7 +11,7 @@ public final class MarkdownRecord {
 
   private MarkdownRecord() {}
 
-  public static String render(Record r) {
+  public static String render(CalculationRecord r) {
     StringBuilder sb = new StringBuilder(1 << 14);
     sb.append("# ").append(escape(r.title())).append("\n\n");
     sb.append("> **Caution.** ").append(escape(Caution.TEXT)).append("\n\n");

@@ -25,7 +25,7 @@ public final class RecordFolder {
   private RecordFolder() {}
 
   /** Writes the folder and returns the relative paths written, sorted. */
-  public static List<String> write(Path dir, Record record, Map<String, byte[]> otherFiles)
+  public static List<String> write(Path dir, CalculationRecord record, Map<String, byte[]> otherFiles)
       throws IOException {
     Map<String, byte[]> files = new TreeMap<>(otherFiles);
     files.put(HTML, HtmlRecord.render(record).getBytes(UTF_8));

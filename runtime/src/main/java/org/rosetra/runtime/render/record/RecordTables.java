@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.rosetra.runtime.render.table.Cell;
 import org.rosetra.runtime.render.table.Column;
+import org.rosetra.runtime.render.table.ColumnFormat;
 import org.rosetra.runtime.render.table.ResultTable;
 import org.rosetra.runtime.render.table.Row;
 
@@ -54,13 +55,18 @@ final class RecordTables {
   static ResultTable series(List<SeriesInput> series) {
     List<Row> rows = new ArrayList<>();
     for (SeriesInput s : series) {
+      // Both ends with one format, so a span reads "0.000 to 120.0" consistently.
+      ColumnFormat f = ColumnFormat.forMagnitude(Math.max(Math.abs(s.timeStart()), Math.abs(s.timeEnd())));
+      String unit = s.timeUnit().isEmpty() ? "" : " " + s.timeUnit();
+      String span = Double.isFinite(s.timeStart()) && Double.isFinite(s.timeEnd())
+          ? f.format(s.timeStart()) + " to " + f.format(s.timeEnd()) + unit
+          : "\u2014";
       rows.add(Row.of(s.name(), Cell.text(s.file()), Cell.text(s.sha256()), Cell.text(Long.toString(s.rows())),
-          Cell.of(s.timeStart()), Cell.of(s.timeEnd()), Cell.text(s.timeUnit()), Cell.text(s.zero())));
+          Cell.text(span), Cell.text(s.zero())));
     }
     return new ResultTable("Measured series", "series",
         List.of(Column.unitless("file"), Column.unitless("SHA-256"), Column.unitless("rows"),
-            Column.unitless("from"), Column.unitless("to"), Column.unitless("time unit"),
-            Column.unitless("zero")),
+            Column.unitless("time span"), Column.unitless("zero")),
         rows);
   }
 

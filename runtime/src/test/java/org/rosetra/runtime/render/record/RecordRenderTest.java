@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 
 class RecordRenderTest {
 
-  private static final Record record = RecordSamples.survey(true); // rendered once: figures are slow-ish
+  private static final CalculationRecord record = RecordSamples.survey(true); // rendered once: figures are slow-ish
 
   @Test
   void renderingTwiceGivesTheSameText() {
@@ -53,6 +53,23 @@ class RecordRenderTest {
       assertTrue(ids.contains(ref.group(1)), "dangling reference " + ref.group(1));
     }
     assertTrue(refs > 0);
+  }
+
+  @Test
+  void inlineFiguresStayWellFormed() throws Exception {
+    String html = HtmlRecord.render(record);
+    Matcher svg = Pattern.compile("(?s)<svg role=\"img\".*?</svg>").matcher(html);
+    int figures = 0;
+    while (svg.find()) {
+      figures++;
+      // XML 1.0 well-formedness through the JDK's parser; no DTD, no outside entity is read.
+      var factory = javax.xml.parsers.DocumentBuilderFactory.newInstance();
+      factory.setFeature("http://apache.org/xml/features/disallow-doctype-decl", true);
+      var doc = factory.newDocumentBuilder()
+          .parse(new java.io.ByteArrayInputStream(svg.group().getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+      assertEquals("svg", doc.getDocumentElement().getTagName());
+    }
+    assertEquals(3, figures);
   }
 
   @Test

@@ -27,7 +27,7 @@ final class RecordSamples {
 
   private RecordSamples() {}
 
-  static Record survey(boolean withHistory) {
+  static CalculationRecord survey(boolean withHistory) {
     List<RecordItem> outputs = new ArrayList<>();
     outputs.add(new RecordItem.TableItem("web_top",
         new ResultTable("web_top, one row per case",
@@ -42,7 +42,7 @@ final class RecordSamples {
       outputs.add(new RecordItem.FigureItem("web_top von Mises over hoist_run",
           PlotSamples.history().render("history-web_top-von_mises")));
     }
-    return new Record(
+    return new CalculationRecord(
         "Hoist beam HB-3, proof load survey",
         List.of(CheckLine.ofCases("web yield margin", true, 0.7107, "proof_60kN"),
             new CheckLine("run peak <= allowable", false, 1.043, "hoist_run", OptionalDouble.of(71.234))),

@@ -10,7 +10,7 @@ import java.util.Objects;
  * tool's version. Numbers are already in display units; {@code strainUnit} labels the
  * corrections.
  */
-public record Record(
+public record CalculationRecord(
     String title,
     List<CheckLine> checks,
     List<Declaration> declarations,
@@ -23,7 +23,7 @@ public record Record(
     List<InputFile> inputs,
     String toolVersion) {
 
-  public Record {
+  public CalculationRecord {
     Objects.requireNonNull(title, "title");
     Objects.requireNonNull(strainUnit, "strainUnit");
     Objects.requireNonNull(scriptName, "scriptName");
