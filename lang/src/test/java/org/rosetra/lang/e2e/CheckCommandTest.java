@@ -54,7 +54,7 @@ class CheckCommandTest {
     @ValueSource(strings = {
         "field-dimension", "field-dimension-angle", "unknown-name", "unknown-member", "reading-count",
         "baseline-missing-rosette", "trig-of-number", "unlike-sum", "missing-strength",
-        "missing-strength-check", "unused-field-dimension", "missing-baseline",
+        "missing-strength-check", "unused-field-dimension", "missing-baseline", "keyword-as-name",
         "undeclared-rosette", "unknown-gauge", "unlike-comparison",
     })
     void checkerErrorsAreReported(String name) {

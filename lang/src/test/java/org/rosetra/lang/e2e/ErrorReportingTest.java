@@ -37,6 +37,7 @@ class ErrorReportingTest {
         "trig-of-number",           // sin(2), at the argument
         "unlike-sum",               // 3 MPa + 2 ue
         "unclosed-block",           // gauge spare { without }
+        "keyword-as-name",          // let rosette = 3
         "missing-strength",         // rankine(r) without ultimate
         "missing-strength-check",   // mohr_coulomb(r) in a check, without ultimate
     })

@@ -59,6 +59,13 @@ class ValuesAndUnitsTest {
     }
 
     @Test
+    void strainPerDegree() {
+        ScriptRun run = ScriptRun.run(dir, "let slope = 11 ue/degC\n").ok();
+        // LANGUAGE.md: units combine with /; a step of 1 degC is a step of 1 K (common practice)
+        assertEquals(11e-6, run.number("slope"), 1e-18);
+    }
+
+    @Test
     void momentInKiloNewtonMetres() {
         ScriptRun run = ScriptRun.run(dir, """
                 let m = 3 kN*m
