@@ -115,4 +115,27 @@ class GivenStatesTest {
         assertEquals(0.0, run.stateMember("hand_point", "sigma_2"), STRESS);
         assertEquals(50e6, run.stateMember("hand_point", "tau_max"), STRESS);
     }
+
+    @Test
+    void stressStateInPlaneStrainGivesItsStrainsByHookesLaw() {
+        ScriptRun run = ScriptRun.run(dir, MATERIAL + """
+                stress deep {
+                  sigma_x  = 60 MPa
+                  sigma_y  = -20 MPa
+                  tau_xy   = 15 MPa
+                  material = s355
+                  state    = plane_strain
+                }
+                """).ok();
+        // Hooke's law, plane strain inverted (textbook):
+        //   eps_x = (1 + nu) / E ((1 - nu) sx - nu sy), gamma = tau / G, eps_z = 0, sigma_z = nu (sx + sy)
+        double e = 205e9;
+        double nu = 0.29;
+        assertEquals((1 + nu) / e * ((1 - nu) * 60e6 - nu * -20e6), run.stateMember("deep", "eps_x"), STRAIN);
+        assertEquals((1 + nu) / e * ((1 - nu) * -20e6 - nu * 60e6), run.stateMember("deep", "eps_y"), STRAIN);
+        assertEquals(15e6 / (e / (2 * (1 + nu))), run.stateMember("deep", "gamma_xy"), STRAIN);
+        assertEquals(0.0, run.stateMember("deep", "eps_z"), STRAIN);
+        assertEquals(nu * (60e6 - 20e6), run.stateMember("deep", "sigma_z"), STRESS);
+        assertEquals(60e6, run.stateMember("deep", "sigma_x"), STRESS);
+    }
 }

@@ -324,6 +324,119 @@ class ReadingPipelineTest {
         assertEquals(fit.getEntry(2), run.member("r", "fill", "gamma_xy"), STRAIN);
     }
 
+    static Stream<Arguments> layoutsWithTransverseSensitivity() {
+        // layout, arm angles from arm a (deg)
+        return Stream.of(
+                Arguments.of("rectangular", new double[] {0, 45, 90}),
+                Arguments.of("delta", new double[] {0, 60, 120}),
+                Arguments.of("arms(0 deg, 30 deg, 100 deg)", new double[] {0, 30, 100}),
+                Arguments.of("arms(0 deg, 60 deg, 120 deg, 90 deg)", new double[] {0, 60, 120, 90}));
+    }
+
+    @ParameterizedTest(name = "{0} at 25 deg, Kt 2 %")
+    @MethodSource("layoutsWithTransverseSensitivity")
+    void transverseSensitivityForEveryLayout(String layout, double[] arms) {
+        StringBuilder readings = new StringBuilder();
+        double[] ue = {420, -75, 180, 260};
+        for (int i = 0; i < arms.length; i++) {
+            readings.append(i == 0 ? "" : ", ").append(ue[i]);
+        }
+        ScriptRun run = ScriptRun.run(dir, MATERIAL + script("""
+                gauge foil {
+                  factor     = 2.00
+                  transverse = 2 %%
+                  nu0        = 0.30
+                }
+                rosette r {
+                  layout = %s
+                  gauge = foil
+                  material = steel
+                  angle = 25 deg
+                }
+                case c1 {
+                  r = %s ue
+                }
+                """, layout, readings)).ok();
+        // LANGUAGE.md, step 4: arm i at 25 + t_i reads (e(t) + Kt e(t + 90)) / (1 - nu0 Kt);
+        // solved by Commons Math (QR: exact for three arms, least squares past three)
+        double kt = 0.02;
+        double[][] model = new double[arms.length][];
+        double[] e = new double[arms.length];
+        for (int i = 0; i < arms.length; i++) {
+            double t = Math.toRadians(25 + arms[i]);
+            double u = t + Math.PI / 2;
+            model[i] = new double[] {
+                (sq(Math.cos(t)) + kt * sq(Math.cos(u))) / (1 - 0.30 * kt),
+                (sq(Math.sin(t)) + kt * sq(Math.sin(u))) / (1 - 0.30 * kt),
+                (Math.sin(t) * Math.cos(t) + kt * Math.sin(u) * Math.cos(u)) / (1 - 0.30 * kt)};
+            e[i] = ue[i] * 1e-6;
+        }
+        RealVector fit = new org.apache.commons.math3.linear.QRDecomposition(new Array2DRowRealMatrix(model))
+                .getSolver().solve(new ArrayRealVector(e));
+        assertEquals(fit.getEntry(0), run.member("r", "c1", "eps_x"), STRAIN);
+        assertEquals(fit.getEntry(1), run.member("r", "c1", "eps_y"), STRAIN);
+        assertEquals(fit.getEntry(2), run.member("r", "c1", "gamma_xy"), STRAIN);
+    }
+
+    @Test
+    void transverseSensitivityOnATee() {
+        ScriptRun run = ScriptRun.run(dir, MATERIAL + """
+                gauge foil {
+                  factor     = 2.05
+                  transverse = -0.4 %
+                }
+                rosette r {
+                  layout = tee
+                  gauge = foil
+                  material = steel
+                  angle = 30 deg
+                }
+                case c1 {
+                  r = 545, -160 ue
+                }
+                """).ok();
+        // LANGUAGE.md, step 4 with nu0 = 0.285 (default), no shear in the arm axes:
+        //   (e_a + Kt e_b) / (1 - nu0 Kt) = r_a, (e_b + Kt e_a) / (1 - nu0 Kt) = r_b
+        // so e_a = (A - Kt B) / (1 - Kt^2), A = r_a (1 - nu0 Kt) (textbook two-arm correction);
+        // then rotated by 30 deg into the part's axes (strain transformation, textbook)
+        double kt = -0.004;
+        double a = 545e-6 * (1 - 0.285 * kt);
+        double b = -160e-6 * (1 - 0.285 * kt);
+        double ea = (a - kt * b) / (1 - kt * kt);
+        double eb = (b - kt * a) / (1 - kt * kt);
+        double t = Math.toRadians(30);
+        assertEquals(ea * sq(Math.cos(t)) + eb * sq(Math.sin(t)), run.member("r", "c1", "eps_x"), STRAIN);
+        assertEquals(ea * sq(Math.sin(t)) + eb * sq(Math.cos(t)), run.member("r", "c1", "eps_y"), STRAIN);
+        assertEquals(2 * (ea - eb) * Math.sin(t) * Math.cos(t), run.member("r", "c1", "gamma_xy"), STRAIN);
+        assertEquals(ea, run.member("r", "c1", "eps_1"), STRAIN);
+    }
+
+    @Test
+    void temperatureMayBeGivenInTheCaseOnly() {
+        ScriptRun run = ScriptRun.run(dir, MATERIAL + """
+                gauge foil {
+                  factor  = 2.00
+                  thermal = -30, 1.5 ue
+                }
+                rosette r {
+                  layout = rectangular
+                  gauge = foil
+                  material = steel
+                }
+                baseline cold {
+                  r = 10, 10, 10 ue
+                }
+                case warm from cold {
+                  temperature = 40 degC
+                  r = 110, 60, 10 ue
+                }
+                """).ok();
+        // LANGUAGE.md, steps 2-3: the case's reading loses TO(40) * 2.00 / 2.00 = (-30 + 60) ue;
+        // the baseline has no temperature, so none is taken from it
+        double to = (-30 + 1.5 * 40) * 1e-6;
+        assertRectangular(run, "warm", 100e-6 - to, 50e-6 - to, 0 - to);
+    }
+
     private static double sq(double x) {
         return x * x;
     }
