@@ -148,4 +148,41 @@ class ResultMembersTest {
         ScriptRun run = run(exUe, eyUe, gUe, "plane_stress");
         assertEquals(expected, run.member("r", "c1", "theta_p"), 1e-9);
     }
+
+    @ParameterizedTest(name = "{0} at {1} deg, every arm 250 ue")
+    @CsvSource(delimiter = ';', value = {
+        "rectangular; 0",
+        "rectangular; 30",
+        "delta; 0",
+        "delta; -40",
+        "arms(0 deg, 45 deg, 90 deg, 135 deg); 15",
+        "arms(0 deg, 60 deg, 120 deg, 90 deg); 90",
+    })
+    void equalBiaxialStrainHasNoPrincipalDirection(String layout, double angle) {
+        ScriptRun run = ScriptRun.run(dir, script("""
+                material steel {
+                  E  = 200 GPa
+                  nu = 0.3
+                }
+                gauge foil {
+                  factor = 2.00
+                }
+                rosette r {
+                  layout   = %s
+                  gauge    = foil
+                  material = steel
+                  angle    = %s deg
+                }
+                case c1 {
+                  r = %s ue
+                }
+                """, layout, angle, layout.contains("135") || layout.contains("120 deg, 90") ? "250, 250, 250, 250"
+                        : "250, 250, 250")).ok();
+        // every arm reads the same: equal biaxial strain, a point of Mohr's circle (textbook)
+        assertEquals(250e-6, run.member("r", "c1", "eps_1"), STRAIN);
+        assertEquals(250e-6, run.member("r", "c1", "eps_2"), STRAIN);
+        assertEquals(0.0, run.member("r", "c1", "gamma_max"), STRAIN);
+        // LANGUAGE.md: theta_p is 0 when eps_1 = eps_2, however the arms lie
+        assertEquals(0.0, run.member("r", "c1", "theta_p"), 1e-9);
+    }
 }
