@@ -61,7 +61,6 @@ class CheckCommandTest {
         checkScript(name);
     }
 
-    @Disabled("BUG: a second 'gauge foil' in one script is accepted by check (exit 0)")
     @Test
     void duplicateName() {
         checkScript("duplicate-name");
