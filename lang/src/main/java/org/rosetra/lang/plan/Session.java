@@ -122,6 +122,7 @@ public final class Session {
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
+        evaluation.allowJava(allowJava);
         try {
             List<CheckResult> checks = new ArrayList<>();
             for (var check : program.checks()) {
