@@ -1,5 +1,6 @@
 package org.rosetra.lang.cli;
 
+import org.rosetra.lang.repl.ReplCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -9,7 +10,7 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Reduces strain-gauge rosette measurements written as a checked script.",
-        subcommands = {RunCommand.class, CheckCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, CheckCommand.class, ReplCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
