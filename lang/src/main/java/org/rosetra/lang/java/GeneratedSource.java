@@ -7,9 +7,11 @@ import org.rosetra.lang.syntax.JavaCode;
 import org.rosetra.lang.syntax.SourceSpan;
 
 /**
- * The Java class a function's body becomes: one static method {@code call(double ...)} holding
- * the body as written. Knows the way back from a place in the generated text to the script, so
- * the compiler's complaints point at the user's own line.
+ * The one JShell expression a function's body becomes: an object whose method
+ * {@code call(double ...)} holds the body as written, reached through the JDK's
+ * {@code ToDoubleFunction<double[]>} so the host can call it without knowing the class. Knows
+ * the way back from a place in the generated text to the script, so the compiler's complaints
+ * point at the user's own line.
  */
 final class GeneratedSource {
     private static final int JAVA_AND_BRACE = "java {".length();
@@ -28,8 +30,13 @@ final class GeneratedSource {
      * A body without a semicolon is taken as one expression ({@code java { x * 2 }}), else as
      * the statements of a method that returns a double.
      */
-    static GeneratedSource of(String className, List<String> parameters, JavaCode code) {
-        StringBuilder head = new StringBuilder("class ").append(className).append(" {\n    static double call(");
+    static GeneratedSource of(List<String> parameters, JavaCode code) {
+        StringBuilder head = new StringBuilder("new java.util.function.ToDoubleFunction<double[]>() {\n")
+                .append("    public double applyAsDouble(double[] a) {\n        return call(");
+        for (int i = 0; i < parameters.size(); i++) {
+            head.append(i > 0 ? ", " : "").append("a[").append(i).append(']');
+        }
+        head.append(");\n    }\n    double call(");
         for (int i = 0; i < parameters.size(); i++) {
             head.append(i > 0 ? ", " : "").append("double ").append(parameters.get(i));
         }

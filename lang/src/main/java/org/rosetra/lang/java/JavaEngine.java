@@ -16,8 +16,8 @@ import org.rosetra.lang.syntax.JavaCode;
 
 /**
  * The process's one JShell, started the first time a script calls a function written in Java
- * (never before), running in this JVM. Each function body is compiled once into a static
- * method and kept; the same parameters and body text reuse the compiled method.
+ * (never before), running in this JVM (several times quicker to start than a second JVM).
+ * Each function body is compiled once and kept; the same parameters and body text reuse it.
  */
 public final class JavaEngine {
     private static final JavaEngine SHARED = new JavaEngine();
@@ -25,7 +25,6 @@ public final class JavaEngine {
     private final Map<String, CompiledFunction> compiled = new HashMap<>();
     private CapturingExecution execution;
     private JShell shell;
-    private int classCount;
     private long startupNanos = -1;
 
     private JavaEngine() {
@@ -53,20 +52,12 @@ public final class JavaEngine {
             return known;
         }
         JShell jshell = shell(functionName, code);
-        String className = "RosetraFunction" + (++classCount) + "_" + functionName;
-        GeneratedSource source = GeneratedSource.of(className, parameters, code);
-        SnippetEvent declared = jshell.eval(source.text()).get(0);
-        if (declared.status() != Snippet.Status.VALID) {
-            throw compileError(jshell, declared.snippet(), source, functionName, code);
+        GeneratedSource source = GeneratedSource.of(parameters, code);
+        SnippetEvent made = jshell.eval(source.text()).get(0);
+        if (made.status() != Snippet.Status.VALID) {
+            throw compileError(jshell, made.snippet(), source, functionName, code);
         }
-        StringBuilder arguments = new StringBuilder();
-        for (int i = 0; i < parameters.size(); i++) {
-            arguments.append(i > 0 ? ", " : "").append("a[").append(i).append(']');
-        }
-        SnippetEvent made = jshell.eval("new java.util.function.ToDoubleFunction<double[]>() {"
-                + " public double applyAsDouble(double[] a) { return " + className + ".call(" + arguments + "); } }")
-                .get(0);
-        if (made.status() != Snippet.Status.VALID || !(execution.lastValue() instanceof ToDoubleFunction<?>)) {
+        if (made.exception() != null || !(execution.lastValue() instanceof ToDoubleFunction<?>)) {
             throw new EvaluationException(code.span(), "cannot prepare the Java function " + functionName);
         }
         @SuppressWarnings("unchecked")
