@@ -39,7 +39,9 @@ grammar Rosetra;
     }
 }
 
-script     : (statement? NL)* statement? EOF ;
+// Shaped so that every decision between lines needs one token of lookahead: an error
+// then shows up where it is, not as a failure to predict the whole script.
+script     : statement? (NL statement?)* EOF ;
 
 statement
     : TITLE STRING                                              # titleStatement
@@ -58,7 +60,10 @@ statement
     | DISPLAY anyName (ASSIGN unit)?                            # displayStatement
     ;
 
-block       : LBRACE (field? NL)* field? RBRACE ;
+// A bare value, for a REPL or notebook cell that asks to see one (not part of a script).
+expressionCell : NL* expr NL* EOF ;
+
+block       : LBRACE field? (NL field?)* RBRACE ;
 field       : anyName ASSIGN fieldValue ;
 // `a to b` is a time window; `a, b, c unit` a reading list (or a list of column names).
 fieldValue  : expr ( TO expr | (COMMA NL* expr)* ) ;
@@ -114,6 +119,7 @@ DISPLAY  : 'display' ;
 TO       : 'to' ;
 
 // A Java-bodied function: kept as one raw token, braces balanced, for the Java bridge.
+// `java` followed by `{` always lexes as this token, so `java` is best left unused as a name.
 JAVA_BLOCK : 'java' [ \t]* JAVA_BRACES ;
 fragment JAVA_BRACES : '{' ( JAVA_BRACES | JAVA_STRING | JAVA_CHAR | ~[{}"'] )* '}' ;
 fragment JAVA_STRING : '"' ( '\\' . | ~["\\\r\n] )* '"' ;

@@ -71,10 +71,16 @@ public final class Diagnostics {
         StringBuilder out = new StringBuilder();
         for (Diagnostic d : sorted()) {
             SourceSpan span = d.span();
-            out.append(span.file()).append(':').append(span.line()).append(':')
-                    .append(span.column()).append(": ").append(d.severity().label())
-                    .append(": ").append(d.message()).append('\n');
-            String line = sourceLine(sourceOfFile.apply(span.file()), span.line());
+            out.append(span.file());
+            if (span.line() > 0) {
+                out.append(':').append(span.line());
+            }
+            // Column 0: a place in a data file, named by its line only (its column is named in the message).
+            if (span.column() > 0) {
+                out.append(':').append(span.column());
+            }
+            out.append(": ").append(d.severity().label()).append(": ").append(d.message()).append('\n');
+            String line = span.column() > 0 ? sourceLine(sourceOfFile.apply(span.file()), span.line()) : null;
             if (line != null) {
                 out.append(line).append('\n').append(carets(line, span)).append('\n');
             }

@@ -15,6 +15,6 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        return new ScriptRunner(System.out, System.err).check(script);
+        return new ScriptRunner(System.out, System.err, VersionProvider.version()).check(script);
     }
 }

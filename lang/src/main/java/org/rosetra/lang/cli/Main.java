@@ -10,7 +10,8 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Reduces strain-gauge rosette measurements written as a checked script.",
-        subcommands = {RunCommand.class, CheckCommand.class, ReplCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, CheckCommand.class, VerifyCommand.class, ReplCommand.class,
+                CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

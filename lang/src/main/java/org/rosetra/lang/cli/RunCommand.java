@@ -28,6 +28,6 @@ final class RunCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         RunOptions options = new RunOptions(json, out, true, allowJava);
-        return new ScriptRunner(System.out, System.err).run(script, options);
+        return new ScriptRunner(System.out, System.err, VersionProvider.version()).run(script, options);
     }
 }

@@ -1,13 +1,14 @@
 package org.rosetra.lang.plan;
 
 import org.rosetra.lang.check.Diagnostics;
+import org.rosetra.lang.check.ScriptChecker;
 import org.rosetra.lang.syntax.Script;
 
-/** Runs the checker's passes over the session's statements before anything is computed. */
+/** Runs the checker's passes (names, then dimensions) before anything is computed. */
 final class CheckerBridge {
     private CheckerBridge() {}
 
     static void check(Script script, Diagnostics diagnostics) {
-        // The resolver and dimension checker are wired here as they land.
+        ScriptChecker.check(script, diagnostics);
     }
 }

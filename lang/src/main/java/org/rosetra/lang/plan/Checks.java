@@ -55,8 +55,26 @@ final class Checks {
         }
         int governing = o.governing() < 0 ? -1 : defined[o.governing()];
         String name = governing < 0 ? null : evaluation.axis().get(governing);
-        return new CheckResult(check, o.pass(), count == 0 ? Double.NaN : o.utilization(), o.unbounded(),
-                utilization, pass, governing, name, null);
+        boolean passes = o.pass();
+        double highest = count == 0 ? Double.NaN : o.utilization();
+        boolean unbounded = o.unbounded();
+        Double at = null;
+        // Tested at every sample of every series that reads what the check looks at.
+        for (SeriesEvaluation.Result series : evaluation.series().values()) {
+            SeriesEvaluation.ProbeResult probe = series.checks().get(check);
+            if (probe == null || !probe.defined()) {
+                continue;
+            }
+            passes &= probe.pass();
+            if (Double.isNaN(highest) || probe.highest() > highest) {
+                highest = probe.highest();
+                unbounded = probe.unbounded();
+                name = series.spec().name();
+                governing = -1;
+                at = probe.time();
+            }
+        }
+        return new CheckResult(check, passes, highest, unbounded, utilization, pass, governing, name, at);
     }
 
     static Comparison comparison(ComparisonOp op) {

@@ -143,7 +143,87 @@ public final class Evaluation {
         if (let.isFunction()) {
             return new Value.Function(let, let.params().stream().map(p -> p.name().text()).toList());
         }
-        return cached("value " + name, () -> expressions.evaluate(let.body(), Map.of()));
+        try {
+            return cached("value " + name, () -> expressions.evaluate(let.body(), Map.of()));
+        } catch (CycleException e) {
+            throw new EvaluationException(let.name().span(), e.getMessage(),
+                    "a value cannot be defined through itself; break the chain");
+        }
+    }
+
+    /** A {@code let} value evaluated over one chunk of a series (never kept: it changes per chunk). */
+    Value letIn(String name, Frame frame) {
+        Let let = program.lets.get(name);
+        if (let.isFunction()) {
+            return let(name);
+        }
+        return expressions.evaluate(let.body(), new Scope(Map.of(), frame));
+    }
+
+    // ---- measured series ----------------------------------------------------------------
+
+    private Map<String, SeriesEvaluation.Result> seriesResults;
+    private java.nio.file.Path folder = java.nio.file.Path.of(".");
+    private org.rosetra.runtime.series.ReadOptions readOptions = org.rosetra.runtime.series.ReadOptions.defaults();
+
+    /** Where series files are found, and how they are read (threads, cancel flag, progress). */
+    public void configureSeries(java.nio.file.Path folder, org.rosetra.runtime.series.ReadOptions options) {
+        this.folder = folder;
+        this.readOptions = options;
+    }
+
+    /** Every series read and reduced, in the order written; read once, on first use. */
+    public Map<String, SeriesEvaluation.Result> series() {
+        if (seriesResults == null) {
+            Map<String, SeriesEvaluation.Result> out = new LinkedHashMap<>();
+            if (!program.series.isEmpty()) {
+                warmUp();
+                for (var s : program.series.values()) {
+                    SeriesSpec spec = SeriesSpec.of(s, folder, this);
+                    List<Call> reductions = SeriesEvaluation.reductionsOf(this, spec.name());
+                    List<org.rosetra.lang.syntax.Plot> plots = new ArrayList<>();
+                    for (var o : program.outputs) {
+                        if (o instanceof org.rosetra.lang.syntax.Plot p && p.kind() == org.rosetra.lang.syntax.PlotKind.VALUE
+                                && (SeriesReferences.mentions(p.target(), program, spec.name()) || program.caseAxis().isEmpty())) {
+                            plots.add(p);
+                        }
+                    }
+                    out.put(spec.name(), new SeriesEvaluation(spec, this, program.checks, reductions, plots).run(readOptions));
+                }
+            }
+            seriesResults = out;
+        }
+        return seriesResults;
+    }
+
+    /** The value of {@code max(x[series])} or {@code min(...)} from the series' pass, or null. */
+    Value seriesReduction(Call call) {
+        for (SeriesEvaluation.Result r : series().values()) {
+            Value v = r.reductions().get(call);
+            if (v != null) {
+                return v;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * Builds every declaration and reduces every case before a series is read on several
+     * threads, so that the threads only ever read what is kept here.
+     */
+    private void warmUp() {
+        for (Declaration d : program.declarations.values()) {
+            switch (d.kind()) {
+                case MATERIAL -> material(d.name().text());
+                case GAUGE -> gauge(d.name().text());
+                case ROSETTE -> rosette(d.name().text());
+                default -> state(d.name().text());
+            }
+        }
+        reduce();
+        for (String r : rosetteNames()) {
+            results(r);
+        }
     }
 
     public boolean isLet(String name) {

@@ -49,6 +49,19 @@ public final class Expressions {
 
     /** The value of {@code e}, with the function parameters in {@code params} bound. */
     public Value evaluate(Expr e, Map<String, Value> params) {
+        return evaluate(e, new Scope(params, null));
+    }
+
+    /**
+     * The value of {@code e} over one chunk of a measured series: rosette members are then the
+     * chunk's samples ({@link Value.History}); a name the chunk does not read throws
+     * {@link Frame.NotInFrame}.
+     */
+    public Value evaluateIn(Expr e, Frame frame) {
+        return evaluate(e, new Scope(Map.of(), frame));
+    }
+
+    Value evaluate(Expr e, Scope params) {
         try {
             return eval(e, params);
         } catch (ColumnDomainException x) {
@@ -61,7 +74,7 @@ public final class Expressions {
 
     /** A single number of the given dimension, in SI; anything else is an error naming {@code what}. */
     double number(Expr e, Dimension expected, Map<String, Value> params, String what) {
-        Value v = evaluate(e, params);
+        Value v = evaluate(e, new Scope(params, null));
         if (v instanceof Value.Number n) {
             if (!n.dimension().equals(expected)) {
                 throw new EvaluationException(e.span(), what + " needs " + describe(expected) + ", got "
@@ -72,7 +85,7 @@ public final class Expressions {
         throw new EvaluationException(e.span(), what + " needs a single number, got " + kindOf(v));
     }
 
-    private Value eval(Expr e, Map<String, Value> params) {
+    private Value eval(Expr e, Scope params) {
         if (e instanceof NumberLit n) {
             return new Value.Number(n.value(), Dimension.NONE);
         }
@@ -95,7 +108,7 @@ public final class Expressions {
             return name(ref, params);
         }
         if (e instanceof Member m) {
-            return member(m, eval(m.target(), params));
+            return member(m, eval(m.target(), params), params);
         }
         if (e instanceof Index ix) {
             return index(ix, params);
@@ -115,9 +128,12 @@ public final class Expressions {
         throw new EvaluationException(e.span(), "this is not a value that can be computed");
     }
 
-    private Value name(NameRef ref, Map<String, Value> params) {
+    private Value name(NameRef ref, Scope params) {
         String name = ref.name();
         Value bound = params.get(name);
+        if (bound == null && params.frame() != null && evaluation.isLet(name)) {
+            return evaluation.letIn(name, params.frame());
+        }
         if (bound != null) {
             return bound;
         }
@@ -136,7 +152,7 @@ public final class Expressions {
         throw new EvaluationException(ref.span(), "'" + name + "' is not a value");
     }
 
-    private Value member(Member m, Value target) {
+    private Value member(Member m, Value target, Scope scope) {
         String name = m.member().text();
         SourceSpan at = m.member().span();
         if (target instanceof Value.MaterialRef mat) {
@@ -147,6 +163,13 @@ public final class Expressions {
             throw new EvaluationException(at, "'" + name + "' is not a member of a rosette's result");
         }
         Dimension d = dimensionOf(member.get());
+        if (target instanceof Value.Rosette r && scope.frame() != null) {
+            if (member.get().needsMaterial() && evaluation.rosette(r.name()).material() == null) {
+                throw new EvaluationException(at, "rosette " + r.name() + " has no material, so it has no " + name);
+            }
+            Frame f = scope.frame();
+            return new Value.History(f.series(), f.member(r.name(), member.get()), f.times(), d);
+        }
         if (target instanceof Value.Rosette r) {
             double[] column = evaluation.results(r.name()).get(member.get());
             if (column == null) {
@@ -215,13 +238,24 @@ public final class Expressions {
         }
     }
 
-    private Value index(Index ix, Map<String, Value> params) {
+    private Value index(Index ix, Scope params) {
         String caseName = ix.caseName().text();
         Integer position = evaluation.axisIndex.get(caseName);
-        if (position == null) {
-            if (evaluation.program.series.containsKey(caseName)) {
-                throw new EvaluationException(ix.caseName().span(), "series histories are not available yet");
+        if (position == null && evaluation.program.series.containsKey(caseName)) {
+            if (params.frame() == null) {
+                throw new EvaluationException(ix.span(), "a history of series " + caseName
+                        + " is a value per sample: reduce it with max() or min(), check it, or plot it");
             }
+            if (!params.frame().series().equals(caseName)) {
+                throw Frame.NotInFrame.INSTANCE;
+            }
+            return eval(ix.target(), params);
+        }
+        if (position != null && params.frame() != null) {
+            // A load case picked inside a series expression: a single number from the cases.
+            return index(ix, new Scope(params.params(), null));
+        }
+        if (position == null) {
             throw new EvaluationException(ix.caseName().span(), "'" + caseName + "' is not a load case or combination");
         }
         Value target = eval(ix.target(), params);
@@ -247,8 +281,15 @@ public final class Expressions {
 
     // ---- calls --------------------------------------------------------------------------
 
-    private Value call(Call c, Map<String, Value> params) {
+    private Value call(Call c, Scope params) {
         String f = c.function().text();
+        if ((f.equals("max") || f.equals("min")) && params.frame() == null) {
+            // max(x[series]) was reduced during the series' pass.
+            Value reduced = evaluation.seriesReduction(c);
+            if (reduced != null) {
+                return reduced;
+            }
+        }
         List<Value> args = new ArrayList<>();
         for (Expr a : c.args()) {
             args.add(eval(a, params));
@@ -256,7 +297,7 @@ public final class Expressions {
         if (evaluation.isLet(f)) {
             Value fn = evaluation.let(f);
             if (fn instanceof Value.Function function) {
-                return apply(function, args, c);
+                return apply(function, args, c, params);
             }
             throw new EvaluationException(c.function().span(), "'" + f + "' is a value, not a function");
         }
@@ -280,7 +321,7 @@ public final class Expressions {
         }
     }
 
-    private Value apply(Value.Function function, List<Value> args, Call c) {
+    private Value apply(Value.Function function, List<Value> args, Call c, Scope scope) {
         Let def = function.definition();
         if (args.size() != function.parameters().size()) {
             throw new EvaluationException(c.span(), "function " + def.name().text() + " takes "
@@ -293,7 +334,7 @@ public final class Expressions {
         if (def.body() instanceof JavaCode) {
             return JavaFunctionCall.call(def, args, c.span(), evaluation.axis, evaluation.javaAllowed());
         }
-        return evaluate(def.body(), bound);
+        return evaluate(def.body(), new Scope(bound, scope.frame()));
     }
 
     private static Value one(Call c, List<Value> args) {

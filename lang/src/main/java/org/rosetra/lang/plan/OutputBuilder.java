@@ -78,10 +78,13 @@ final class OutputBuilder {
         for (Expr item : t.items()) {
             if (item instanceof NameRef ref && evaluation.isRosette(ref.name())) {
                 flushColumns(t, columns, out);
-                out.add(new Output.TableOutput(t, rosetteTable(ref.name())));
+                out.add(new Output.TableOutput(t, "rosette-" + ref.name() + "-strains", rosetteTable(ref.name(), false)));
+                if (evaluation.rosette(ref.name()).material() != null) {
+                    out.add(new Output.TableOutput(t, "rosette-" + ref.name() + "-stresses", rosetteTable(ref.name(), true)));
+                }
             } else if (item instanceof NameRef ref && evaluation.isState(ref.name())) {
                 flushColumns(t, columns, out);
-                out.add(new Output.TableOutput(t, stateTable(ref.name())));
+                out.add(new Output.TableOutput(t, "state-" + ref.name(), stateTable(ref.name())));
             } else {
                 columns.add(item);
             }
@@ -89,9 +92,18 @@ final class OutputBuilder {
         flushColumns(t, columns, out);
     }
 
-    /** The standard result table of a rosette: one row per case where it has a result. */
-    ResultTable rosetteTable(String rosette) {
-        EnumMap<RosetteMember, double[]> results = evaluation.results(rosette);
+    /**
+     * The standard result table of a rosette, one row per case where it has a result: its
+     * strains (with theta_p), or its stresses. Two tables read better than one of 18 columns.
+     */
+    ResultTable rosetteTable(String rosette, boolean stresses) {
+        EnumMap<RosetteMember, double[]> all = evaluation.results(rosette);
+        EnumMap<RosetteMember, double[]> results = new EnumMap<>(RosetteMember.class);
+        all.forEach((m, v) -> {
+            if ((m.kind() == MemberKind.STRESS) == stresses) {
+                results.put(m, v);
+            }
+        });
         StrainState[] states = evaluation.strains(rosette);
         List<Column> columns = new ArrayList<>();
         for (RosetteMember m : results.keySet()) {
@@ -108,7 +120,7 @@ final class OutputBuilder {
             }
             rows.add(new Row(evaluation.axis().get(i), cells));
         }
-        return new ResultTable("Rosette " + rosette, columns, rows);
+        return new ResultTable("Rosette " + rosette + (stresses ? ", stresses" : ", strains"), columns, rows);
     }
 
     private ResultTable stateTable(String state) {
@@ -151,7 +163,8 @@ final class OutputBuilder {
                 rows.add(new Row(evaluation.axis().get(i), cells));
             }
         }
-        out.add(new Output.TableOutput(t, new ResultTable("Values per case", columns, rows)));
+        String name = org.rosetra.runtime.render.plot.FileStem.from("values-" + columns.get(0).header());
+        out.add(new Output.TableOutput(t, name, new ResultTable("Values per case", columns, rows)));
         items.clear();
     }
 

@@ -65,8 +65,21 @@ final class ResultsBuilder {
             outcomes.add(new RunResults.CheckOutcome(c.check().label().value(), c.passes(), utilization,
                     c.governingName(), c.at()));
         }
-        return new RunResults(evaluation.program().title(), axis, rosettes, states, values, outcomes,
-                new LinkedHashMap<>());
+        Map<String, RunResults.SeriesSummary> series = new LinkedHashMap<>();
+        for (var e : evaluation.series().entrySet()) {
+            Map<String, Map<String, RunResults.Extremes>> perRosette = new LinkedHashMap<>();
+            for (var r : e.getValue().extremes().entrySet()) {
+                Map<String, RunResults.Extremes> perMember = new LinkedHashMap<>();
+                for (var m : r.getValue().entrySet()) {
+                    var x = m.getValue();
+                    perMember.put(m.getKey().scriptName(), new RunResults.Extremes(jsonValue(m.getKey(), x.max()),
+                            x.timeOfMax(), jsonValue(m.getKey(), x.min()), x.timeOfMin()));
+                }
+                perRosette.put(r.getKey(), perMember);
+            }
+            series.put(e.getKey(), new RunResults.SeriesSummary(e.getValue().samples(), perRosette));
+        }
+        return new RunResults(evaluation.program().title(), axis, rosettes, states, values, outcomes, series);
     }
 
     static double jsonValue(RosetteMember member, double si) {

@@ -8,7 +8,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import org.rosetra.lang.check.Diagnostics;
+import java.util.ArrayList;
+import java.util.List;
 import org.rosetra.lang.output.OutputFolder;
+import org.rosetra.lang.output.RecordBuilder;
+import org.rosetra.runtime.render.record.InputFile;
+import org.rosetra.runtime.render.record.CalculationRecord;
 import org.rosetra.lang.output.ResultsJson;
 import org.rosetra.runtime.render.table.PlainTextTable;
 
@@ -24,10 +29,12 @@ public final class ScriptRunner {
 
     private final PrintStream out;
     private final PrintStream err;
+    private final String toolVersion;
 
-    public ScriptRunner(PrintStream out, PrintStream err) {
+    public ScriptRunner(PrintStream out, PrintStream err, String toolVersion) {
         this.out = out;
         this.err = err;
+        this.toolVersion = toolVersion;
     }
 
     /** Parses and checks only. */
@@ -68,7 +75,12 @@ public final class ScriptRunner {
             byte[] json = ResultsJson.write(outcome.results());
             if (options.writeOutputs()) {
                 Path folder = options.outDir() != null ? options.outDir() : defaultOutputFolder(script);
-                OutputFolder.write(folder, loaded, outcome, json);
+                List<InputFile> inputs = new ArrayList<>();
+                inputs.add(RecordBuilder.input(script.getFileName().toString(), loaded.text));
+                loaded.session.moduleSources().forEach((name, text) -> inputs.add(RecordBuilder.input(name, text)));
+                CalculationRecord record = RecordBuilder.build(script.getFileName().toString(), loaded.text, outcome,
+                        loaded.session, inputs, toolVersion);
+                OutputFolder.write(folder, record, json);
             }
             if (options.json() != null) {
                 OutputFolder.writeAtomically(options.json(), json);
@@ -80,12 +92,62 @@ public final class ScriptRunner {
         return outcome.results().allChecksPass() ? PASSED : CHECK_FAILED;
     }
 
+    /**
+     * Re-runs the script without writing anything and compares every number with the committed
+     * results: 0 when all agree, 1 when any differs, 2 on a script error.
+     */
+    public int verify(Path script, Path committedResults, double rtol, boolean allowJava) {
+        if (!(rtol >= 0)) {
+            err.println("rosetra: error: --rtol must be zero or positive, got " + rtol);
+            return ERROR;
+        }
+        Object committed;
+        try {
+            committed = org.rosetra.lang.output.JsonTree.parse(Files.readAllBytes(committedResults));
+        } catch (java.nio.file.NoSuchFileException e) {
+            err.println("rosetra: error: there are no committed results at " + committedResults
+                    + "; run the script once and commit its results.json, or name them with --against");
+            return ERROR;
+        } catch (IOException e) {
+            err.println("rosetra: error: cannot read " + committedResults + ": " + e.getMessage());
+            return ERROR;
+        }
+        Loaded loaded = load(script);
+        if (loaded == null) {
+            return ERROR;
+        }
+        loaded.session.allowJava(allowJava);
+        Diagnostics diagnostics = new Diagnostics();
+        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
+        Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
+        if (report(diagnostics, loaded.session)) {
+            return ERROR;
+        }
+        Object now;
+        try {
+            now = org.rosetra.lang.output.JsonTree.parse(ResultsJson.write(outcome.results()));
+        } catch (IOException e) {
+            throw new IllegalStateException("results.json written by this tool does not read back", e);
+        }
+        var differences = org.rosetra.lang.output.ResultsComparison.compare(committed, now, rtol);
+        for (var d : differences) {
+            out.println(d);
+        }
+        if (differences.isEmpty()) {
+            out.println("verified: every number agrees with " + committedResults
+                    + " (relative tolerance " + rtol + ")");
+            return PASSED;
+        }
+        out.println(differences.size() + (differences.size() == 1 ? " difference" : " differences")
+                + " from " + committedResults);
+        return CHECK_FAILED;
+    }
+
     /** {@code survey.strain} writes to {@code survey.out/} next to it. */
     public static Path defaultOutputFolder(Path script) {
         String name = script.getFileName().toString();
         String stem = name.endsWith(".strain") ? name.substring(0, name.length() - ".strain".length()) : name;
-        Path parent = script.toAbsolutePath().getParent();
-        return parent.resolve(stem + ".out");
+        return script.resolveSibling(stem + ".out");
     }
 
     static String verdict(CheckResult c) {

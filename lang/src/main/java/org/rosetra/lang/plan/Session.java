@@ -37,7 +37,9 @@ public final class Session {
     private final Map<String, String> sourceText = new HashMap<>();
     private final List<Entry> entries = new ArrayList<>();
     private final Map<String, List<Statement>> modules = new LinkedHashMap<>();
+    private final Map<String, String> moduleFileNames = new HashMap<>();
     private boolean allowJava;
+    private org.rosetra.runtime.series.ReadOptions readOptions = org.rosetra.runtime.series.ReadOptions.defaults();
 
     private record Entry(String source, Statement statement) {}
 
@@ -55,6 +57,15 @@ public final class Session {
 
     public boolean javaAllowed() {
         return allowJava;
+    }
+
+    /** How measured series are read: threads, a cancel flag (for an interrupt), progress. */
+    public void readOptions(org.rosetra.runtime.series.ReadOptions options) {
+        this.readOptions = options;
+    }
+
+    public org.rosetra.runtime.series.ReadOptions readOptions() {
+        return readOptions;
     }
 
     /** The text of a file or cell the session has seen, for diagnostics (null if unknown). */
@@ -92,6 +103,16 @@ public final class Session {
         return script.statements();
     }
 
+    /** The modules loaded by {@code use}, as file name (as diagnostics show it) and text, in load order. */
+    public Map<String, String> moduleSources() {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (String key : modules.keySet()) {
+            String name = moduleFileNames.get(key);
+            out.put(name, sourceText.get(name));
+        }
+        return out;
+    }
+
     /** Removes everything that {@code source} defined. */
     public void forget(String source) {
         entries.removeIf(e -> e.source().equals(source));
@@ -118,25 +139,30 @@ public final class Session {
         Script whole = new Script("(session)", all);
         CheckerBridge.check(whole, diagnostics);
         if (diagnostics.hasErrors()) {
-            return new Outcome(diagnostics, null, List.of(), List.of(), null);
+            return new Outcome(diagnostics, null, List.of(), List.of(), null, null);
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
         evaluation.allowJava(allowJava);
+        evaluation.configureSeries(folder, readOptions);
         try {
             List<CheckResult> checks = new ArrayList<>();
             for (var check : program.checks()) {
                 checks.add(Checks.test(check, evaluation));
             }
             RunResults results = ResultsBuilder.build(evaluation, checks);
-            List<Output> outputs = new OutputBuilder(evaluation, this).build(program.outputs());
-            return new Outcome(diagnostics, results, outputs, checks, evaluation);
+            OutputBuilder builder = new OutputBuilder(evaluation, this);
+            List<Output> outputs = builder.build(program.outputs());
+            return new Outcome(diagnostics, results, outputs, checks, evaluation, builder.display());
         } catch (EvaluationException e) {
             diagnostics.error(e.span(), e.getMessage(), e.hint());
+        } catch (org.rosetra.runtime.series.SeriesDataException e) {
+            diagnostics.error(new org.rosetra.lang.syntax.SourceSpan(e.shownName(), (int) e.line(), 0, (int) e.line(), 0),
+                    (e.column() != null ? "column \"" + e.column() + "\": " : "") + e.problem(), null);
         } catch (Evaluation.CycleException e) {
-            diagnostics.error(null, e.getMessage());
+            diagnostics.error(all.get(0).span(), e.getMessage());
         }
-        return new Outcome(diagnostics, null, List.of(), List.of(), null);
+        return new Outcome(diagnostics, null, List.of(), List.of(), null, null);
     }
 
     private void loadModule(Use use, Diagnostics diagnostics) {
@@ -181,6 +207,7 @@ public final class Session {
             return;
         }
         sourceText.put(fileName, text);
+        moduleFileNames.put(key, fileName);
         Script script = ScriptParser.parse(fileName, text, diagnostics);
         List<Statement> loaded = new ArrayList<>();
         modules.put(key, loaded);

@@ -201,8 +201,7 @@ public final class Repl {
             return PlainTextTable.render(t.table()).stripTrailing();
         }
         Output.FigureOutput f = (Output.FigureOutput) o;
-        return "(figure \"" + f.caption() + "\": a terminal cannot show it; rosetra run saves it in plots/"
-                + f.fileStem() + ".svg)";
+        return "(figure \"" + f.caption() + "\": a terminal cannot show it; rosetra run saves it in plots/)";
     }
 
     private static ValueText valueText(Outcome outcome) {

@@ -5,6 +5,7 @@ import static org.rosetra.lang.syntax.RosetraLexer.*;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.antlr.v4.runtime.CommonToken;
@@ -33,6 +34,7 @@ final class BracketBalancer {
 
     private final String file;
     private final Diagnostics diagnostics;
+    private final Set<Integer> linesReported = new HashSet<>();
 
     BracketBalancer(String file, Diagnostics diagnostics) {
         this.file = file;
@@ -52,12 +54,12 @@ final class BracketBalancer {
             }
             switch (token.getType()) {
                 case STRAY -> {
-                    diagnostics.error(Spans.of(file, token),
+                    error(Spans.of(file, token),
                             "unexpected character '" + token.getText() + "'", strayHint(token.getText()));
                     continue;
                 }
                 case UNCLOSED_STRING -> {
-                    diagnostics.error(Spans.of(file, token), "string is not closed before the end of the line",
+                    error(Spans.of(file, token), "string is not closed before the end of the line",
                             "add the closing '\"'");
                     CommonToken closed = new CommonToken(token);
                     closed.setType(STRING);
@@ -71,7 +73,7 @@ final class BracketBalancer {
                             continue;
                         }
                         Token open = brackets.peekLast();
-                        diagnostics.error(Spans.of(file, open), "'" + open.getText() + "' is not closed on its line",
+                        error(Spans.of(file, open), "'" + open.getText() + "' is not closed on its line",
                                 "add the closing '" + closing(open) + "'");
                         brackets.clear();
                     }
@@ -87,7 +89,7 @@ final class BracketBalancer {
                 case LBRACE -> blocks.push(new OpenBlock(token, owner(out, lineStart)));
                 case RBRACE -> {
                     if (blocks.isEmpty()) {
-                        diagnostics.error(Spans.of(file, token), "'}' has no block to close");
+                        error(Spans.of(file, token), "'}' has no block to close");
                         continue;
                     }
                     blocks.pop();
@@ -96,7 +98,7 @@ final class BracketBalancer {
                     if (atLineStart && !blocks.isEmpty() && startsStatement(tokens, i)) {
                         while (!blocks.isEmpty()) {
                             OpenBlock open = blocks.pop();
-                            diagnostics.error(Spans.of(file, open.brace()), open.owner()
+                            error(Spans.of(file, open.brace()), open.owner()
                                     + " is not closed: '}' expected before line " + token.getLine());
                             out.add(synthetic(RBRACE, "}", token));
                             out.add(synthetic(NL, "\n", token));
@@ -109,17 +111,31 @@ final class BracketBalancer {
         Token last = tokens.isEmpty() ? null : tokens.get(tokens.size() - 1);
         while (!blocks.isEmpty()) {
             OpenBlock open = blocks.pop();
-            diagnostics.error(Spans.of(file, open.brace()),
+            error(Spans.of(file, open.brace()),
                     open.owner() + " is not closed: '}' expected before the end of the file");
             out.add(synthetic(NL, "\n", last));
             out.add(synthetic(RBRACE, "}", last));
         }
         if (!brackets.isEmpty()) {
             Token open = brackets.peekLast();
-            diagnostics.error(Spans.of(file, open), "'" + open.getText() + "' is not closed",
+            error(Spans.of(file, open), "'" + open.getText() + "' is not closed",
                     "add the closing '" + closing(open) + "'");
         }
         return out;
+    }
+
+    /** The lines given an error here, so that the parser does not report them again. */
+    Set<Integer> linesReported() {
+        return linesReported;
+    }
+
+    private void error(SourceSpan span, String message) {
+        error(span, message, null);
+    }
+
+    private void error(SourceSpan span, String message, String hint) {
+        linesReported.add(span.line());
+        diagnostics.error(span, message, hint);
     }
 
     /** A statement keyword at index i, not used as a field name ({@code gauge = foil350}). */

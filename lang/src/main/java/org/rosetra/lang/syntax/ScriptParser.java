@@ -3,6 +3,7 @@ package org.rosetra.lang.syntax;
 import static org.rosetra.lang.syntax.RosetraLexer.*;
 
 import java.util.List;
+import java.util.function.Function;
 import java.util.function.Predicate;
 import org.antlr.v4.runtime.BailErrorStrategy;
 import org.antlr.v4.runtime.CharStreams;
@@ -31,30 +32,44 @@ public final class ScriptParser {
     /** As {@link #parse(String, String, Diagnostics)}, with the unit table to consult. */
     public static Script parse(String fileName, String text, Diagnostics diagnostics,
             Predicate<String> unitSymbols) {
+        return new TreeBuilder(fileName, diagnostics)
+                .script(run(fileName, text, diagnostics, unitSymbols, RosetraParser::script));
+    }
+
+    /**
+     * Parses a bare value such as {@code web_top.sigma_1[proof]}, for a REPL or notebook cell
+     * that asks to see one; null when it has a syntax error (reported).
+     */
+    public static Expr parseExpression(String cellName, String text, Diagnostics diagnostics) {
+        return new TreeBuilder(cellName, diagnostics)
+                .expression(run(cellName, text, diagnostics, UnitSymbols.core(), RosetraParser::expressionCell));
+    }
+
+    private static <T> T run(String fileName, String text, Diagnostics diagnostics,
+            Predicate<String> unitSymbols, Function<RosetraParser, T> rule) {
         RosetraLexer lexer = new RosetraLexer(CharStreams.fromString(text, fileName));
         lexer.removeErrorListeners();
         List<? extends Token> raw = lexer.getAllTokens();
-        List<Token> tokens = new BracketBalancer(fileName, diagnostics).balance(raw);
+        BracketBalancer balancer = new BracketBalancer(fileName, diagnostics);
+        List<Token> tokens = balancer.balance(raw);
         CommonTokenStream stream = new CommonTokenStream(new ListTokenSource(tokens, fileName));
         RosetraParser parser = new RosetraParser(stream);
         parser.unitSymbols = unitSymbols;
         parser.removeErrorListeners();
-        RosetraParser.ScriptContext tree;
         // SLL is fast and right for nearly every script; only when it fails do we pay for
         // full LL, which also gives the exact error.
         parser.getInterpreter().setPredictionMode(PredictionMode.SLL);
         parser.setErrorHandler(new BailErrorStrategy());
         try {
-            tree = parser.script();
+            return rule.apply(parser);
         } catch (ParseCancellationException sllFailed) {
             stream.seek(0);
             parser.reset();
             parser.getInterpreter().setPredictionMode(PredictionMode.LL);
             parser.setErrorHandler(new DefaultErrorStrategy());
-            parser.addErrorListener(new SyntaxErrorListener(fileName, diagnostics));
-            tree = parser.script();
+            parser.addErrorListener(new SyntaxErrorListener(fileName, diagnostics, balancer.linesReported()));
+            return rule.apply(parser);
         }
-        return new TreeBuilder(fileName, diagnostics).script(tree);
     }
 
     /**

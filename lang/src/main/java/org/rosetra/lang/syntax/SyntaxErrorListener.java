@@ -3,7 +3,6 @@ package org.rosetra.lang.syntax;
 import static org.rosetra.lang.syntax.RosetraParser.*;
 
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.antlr.v4.runtime.BaseErrorListener;
@@ -27,76 +26,81 @@ final class SyntaxErrorListener extends BaseErrorListener {
 
     private final String file;
     private final Diagnostics diagnostics;
-    private final Set<Integer> linesReported = new HashSet<>();
+    private final Set<Integer> linesReported;
 
-    SyntaxErrorListener(String file, Diagnostics diagnostics) {
+    /** @param linesReported lines already given an error (by BracketBalancer); updated */
+    SyntaxErrorListener(String file, Diagnostics diagnostics, Set<Integer> linesReported) {
         this.file = file;
         this.diagnostics = diagnostics;
+        this.linesReported = linesReported;
     }
 
     @Override
     public void syntaxError(Recognizer<?, ?> recognizer, Object offendingSymbol, int line,
             int charPositionInLine, String antlrMessage, RecognitionException e) {
+        Parser parser = (Parser) recognizer;
         Token found = (Token) offendingSymbol;
-        if (!linesReported.add(found.getLine())) {
+        Token previous = found.getTokenIndex() > 0
+                ? parser.getInputStream().get(found.getTokenIndex() - 1) : null;
+        if (linesReported.contains(found.getLine())
+                || previous != null && linesReported.contains(previous.getLine())) {
             return;
         }
-        Parser parser = (Parser) recognizer;
+        linesReported.add(found.getLine());
         IntervalSet expected = e != null && e.getExpectedTokens() != null
                 ? e.getExpectedTokens() : parser.getExpectedTokens();
         RuleContext context = e != null && e.getCtx() != null ? e.getCtx() : parser.getContext();
-        Explained explained = explain(found, expected, context);
+        boolean atLineStart = previous == null || previous.getType() == NL;
+        Explained explained = explain(found, expected, context, atLineStart);
         diagnostics.error(Spans.of(file, found), explained.message(), explained.hint());
     }
 
     private record Explained(String message, String hint) {
     }
 
-    private Explained explain(Token found, IntervalSet expected, RuleContext context) {
+    private Explained explain(Token found, IntervalSet expected, RuleContext context, boolean atLineStart) {
         int type = found.getType();
         boolean endOfLine = type == NL || type == Token.EOF;
-        boolean inBlock = within(context, RULE_block) || within(context, RULE_field);
-        if (within(context, RULE_unit) || within(context, RULE_unitPower)) {
-            return new Explained("a unit's power must be a number, found " + describe(found),
-                    "write mm^2 or s^-1");
-        }
-        if (!endOfLine && expected.contains(NL) && !expected.contains(NAME)
-                || !endOfLine && expected.contains(NL) && isAfterCompleteValue(context)) {
-            if (type == COMMA && within(context, RULE_statement) && !inBlock) {
-                return new Explained("a list of values belongs in a field of a block",
-                        "readings go in a case or baseline block: web_top = 412, -38, -121 ue");
-            }
-            return inBlock
-                    ? new Explained("expected one field per line, found " + describe(found), null)
-                    : new Explained("expected one statement per line, found " + describe(found), null);
-        }
-        if (context.getRuleIndex() == RULE_script || context.getRuleIndex() == RULE_statement
-                && expected.contains(TITLE)) {
-            String hint = type == NAME ? "name a value with let: let " + found.getText() + " = ..."
+        boolean inField = within(context, RULE_field);
+        boolean inBlock = within(context, RULE_block);
+        if (!endOfLine && atLineStart && context.getRuleIndex() == RULE_script) {
+            String hint = type == NAME ? "a value is named with let: let " + found.getText() + " = ..."
                     : "a statement starts with " + STATEMENTS;
             return new Explained("expected a statement, found " + describe(found), hint);
         }
-        if (within(context, RULE_block) && !within(context, RULE_field) && expected.contains(NAME)) {
+        if (!endOfLine && atLineStart && inBlock && !inField) {
             return new Explained("expected a field (name = value) or '}', found " + describe(found), null);
         }
-        if (expected.contains(LESS) && expected.contains(GREATER_EQUAL)) {
-            return new Explained("a check compares its two sides, found " + describe(found),
-                    "use <, <=, > or >=");
+        if (expected.contains(LESS) && expected.contains(GREATER_EQUAL) && !expected.contains(NL)) {
+            return new Explained("a check compares with <, <=, > or >=, found " + describe(found),
+                    type == ASSIGN ? "there is no equality check: write <= or >=" : null);
+        }
+        if (within(context, RULE_unitPower)) {
+            return new Explained("a unit's power must be a number, found " + describe(found),
+                    "write mm^2 or s^-1");
+        }
+        if (!endOfLine && expected.contains(NL)) {
+            if (type == COMMA && !inBlock) {
+                return new Explained("a list of values belongs in a field of a block",
+                        "readings go in a case or baseline: web_top = 412, -38, -121 ue");
+            }
+            if (type == RBRACE) {
+                return new Explained("'}' must stand on its own line, or after the last field", null);
+            }
+            return inBlock
+                    ? new Explained("expected one field per line, found " + describe(found), null)
+                    : new Explained("expected one statement per line, found " + describe(found),
+                            "start a new line for the next statement");
         }
         if (expected.size() == 1 && expected.contains(ASSIGN)) {
             return new Explained("expected '=' after the name, found " + describe(found), null);
         }
-        if (type == ASSIGN && within(context, RULE_statement)) {
-            return new Explained("unexpected '='", "name a value with let: let x = ...");
-        }
-        if (type == RBRACE && expected.contains(NL)) {
-            return new Explained("'}' must stand on its own line, or after the last field", null);
-        }
         if (endOfLine) {
             return new Explained((type == NL ? "the line ends" : "the file ends")
-                    + " before the statement is complete: expected " + describe(expected), null);
+                    + " before the " + (inField ? "field" : "statement") + " is complete: expected "
+                    + describe(expected), null);
         }
-        return new Explained("unexpected " + describe(found) + "; expected " + describe(expected), null);
+        return new Explained("expected " + describe(expected) + ", found " + describe(found), null);
     }
 
     /** An expression is complete and could only go on with an operator: likely two on a line. */

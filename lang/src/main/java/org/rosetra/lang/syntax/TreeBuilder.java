@@ -44,6 +44,11 @@ final class TreeBuilder {
         return new Script(file, statements);
     }
 
+    /** The value of an expression cell, or null when it could not be read whole. */
+    Expr expression(ExpressionCellContext context) {
+        return isWhole(context, false) ? expr(context.expr()) : null;
+    }
+
     private Statement statement(StatementContext context) {
         SourceSpan span = span(context);
         if (context instanceof TitleStatementContext title) {

@@ -1,7 +1,7 @@
 package org.rosetra.lang.syntax;
 
-import java.util.Set;
 import java.util.function.Predicate;
+import org.rosetra.runtime.units.Units;
 
 /**
  * Which names the parser treats as unit symbols when a unit might go on over {@code *} or
@@ -9,19 +9,11 @@ import java.util.function.Predicate;
  */
 public final class UnitSymbols {
 
-    /** The symbols LANGUAGE.md requires, plus a few common SI ones. */
-    private static final Set<String> CORE = Set.of(
-            "%", "ue", "\u00B5\u03B5", "\u03BC\u03B5",
-            "Pa", "kPa", "MPa", "GPa", "bar", "psi", "ksi", "Msi",
-            "deg", "rad", "degC", "degF", "K", "ohm", "kohm", "\u03A9", "A", "mA", "V", "mV",
-            "m", "cm", "mm", "um", "in", "ft", "kg", "N", "kN", "MN", "lbf", "kip",
-            "s", "ms", "min", "h", "Hz");
-
     private UnitSymbols() {
     }
 
-    /** The symbols known to the parser by default. */
+    /** The symbols of the runtime's unit table. */
     public static Predicate<String> core() {
-        return CORE::contains;
+        return symbol -> Units.find(symbol).isPresent();
     }
 }

@@ -176,6 +176,7 @@ class JavaFunctionTest {
                 let doubled(x: stress): stress = java { return 2 * x; }
                 let y = doubled(3 deg)
                 """, true);
-        assertEquals("argument 1 of doubled (x) must be stress, got angle", onlyError(outcome).message());
+        // The checker sees it before anything runs.
+        assertEquals("parameter x of doubled needs a stress, got an angle", onlyError(outcome).message());
     }
 }

@@ -60,7 +60,7 @@ class ReplTest {
     @Test
     void aWholeEntryOfSeveralLinesMayComeAtOnce() {
         assertEquals("", enter("gauge foil {\n  factor = 2.1\n}"));
-        assertEquals("word = \"text\"", enter("let word = \"text\""));
+        assertEquals("two = 2.000", enter("let two = 2"));
     }
 
     @Test

@@ -266,6 +266,17 @@ class ScriptParserTest {
         assertTrue(ScriptParser.isComplete("let a = 2 MPa"));
     }
 
+    @Test
+    void aBareValueForACell() {
+        // Our own design for the REPL and notebook: a cell may ask to see one value.
+        Diagnostics diagnostics = new Diagnostics();
+        Expr value = ScriptParser.parseExpression("cell", "web_top.sigma_1[proof_60kN]\n", diagnostics);
+        assertInstanceOf(Index.class, value);
+        assertFalse(diagnostics.hasErrors());
+        assertNull(ScriptParser.parseExpression("cell", "2 *", diagnostics));
+        assertTrue(diagnostics.hasErrors());
+    }
+
     /** The text a single-line span covers. */
     static String cut(String text, SourceSpan span) {
         String line = text.split("\n", -1)[span.line() - 1];

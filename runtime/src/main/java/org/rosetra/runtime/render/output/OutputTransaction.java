@@ -2,11 +2,14 @@ package org.rosetra.runtime.render.output;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.io.OutputStream;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -60,10 +63,10 @@ public final class OutputTransaction implements AutoCloseable {
     requireOpen();
     Path target = resolveInside(relativePath);
     createFolders(target.getParent());
-    Path temp = Files.createTempFile(target.getParent(), TEMP_PREFIX, TEMP_SUFFIX);
+    Path temp = createTemp(target);
     Path previous = staged.put(target, temp);
-    try {
-      Files.write(temp, bytes);
+    try (OutputStream out = Files.newOutputStream(temp, StandardOpenOption.WRITE)) {
+      out.write(bytes);
     } finally {
       if (previous != null) {
         Files.deleteIfExists(previous);
@@ -107,6 +110,25 @@ public final class OutputTransaction implements AutoCloseable {
     abort();
   }
 
+  /**
+   * A new empty file beside the target. Not Files.createTempFile: that one is private to the
+   * owner (0600), and the rename would carry that onto the output; this one gets the usual
+   * permissions of a new file (the process's umask decides).
+   */
+  private static Path createTemp(Path target) throws IOException {
+    String base = TEMP_PREFIX + target.getFileName() + ".";
+    for (int attempt = 0; ; attempt++) {
+      Path temp = target.resolveSibling(base + attempt + TEMP_SUFFIX);
+      try {
+        return Files.createFile(temp);
+      } catch (FileAlreadyExistsException taken) {
+        if (attempt > 10_000) {
+          throw taken;
+        }
+      }
+    }
+  }
+
   private void move(Path temp, Path target) throws IOException {
     try {
       Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -132,6 +154,17 @@ public final class OutputTransaction implements AutoCloseable {
       }
       for (Path p : stale) {
         Files.deleteIfExists(p);
+      }
+    }
+    removeLeftoverTemps(root); // from a run that was killed before it could clean up
+  }
+
+  private void removeLeftoverTemps(Path folder) throws IOException {
+    try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder, TEMP_PREFIX + "*" + TEMP_SUFFIX)) {
+      for (Path p : entries) {
+        if (Files.isRegularFile(p) && !staged.containsValue(p)) {
+          Files.deleteIfExists(p);
+        }
       }
     }
   }

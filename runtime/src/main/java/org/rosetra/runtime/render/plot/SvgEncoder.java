@@ -39,7 +39,52 @@ public final class SvgEncoder {
       throw new UncheckedIOException(e); // an in-memory stream does not fail
     }
     String svg = out.toString(StandardCharsets.UTF_8);
-    return shortenDecimals(svg).getBytes(StandardCharsets.UTF_8);
+    return renumberClips(shortenDecimals(asciiDigits(svg))).getBytes(StandardCharsets.UTF_8);
+  }
+
+  /**
+   * VectorGraphics2D writes colours with String.format in the default locale, which in a few
+   * locales uses other digits. Our SVG holds no text, only numbers, so mapping every decimal
+   * digit to ASCII is safe and makes the file independent of the locale.
+   */
+  static String asciiDigits(String svg) {
+    StringBuilder sb = null;
+    for (int i = 0; i < svg.length(); i++) {
+      char c = svg.charAt(i);
+      if (c > 127 && Character.isDigit(c)) {
+        if (sb == null) {
+          sb = new StringBuilder(svg);
+        }
+        sb.setCharAt(i, (char) ('0' + Character.digit(c, 10)));
+      }
+    }
+    return sb == null ? svg : sb.toString();
+  }
+
+  private static final Pattern CLIP_ID = Pattern.compile("id=\"(clip-?\\d+)\"");
+
+  /**
+   * VectorGraphics2D names clip paths after a hash of their shape; we number them in order of
+   * appearance instead ({@code clip1}, {@code clip2}, ...), so ids never depend on hashing.
+   */
+  static String renumberClips(String svg) {
+    Matcher m = CLIP_ID.matcher(svg);
+    java.util.Map<String, String> names = new java.util.LinkedHashMap<>();
+    while (m.find()) {
+      names.putIfAbsent(m.group(1), "clip" + (names.size() + 1));
+    }
+    if (names.isEmpty()) {
+      return svg;
+    }
+    Pattern ref = Pattern.compile("(id=\"|url\\(#)(clip-?\\d+)([\")])");
+    Matcher r = ref.matcher(svg);
+    StringBuilder sb = new StringBuilder(svg.length());
+    while (r.find()) {
+      String renamed = names.getOrDefault(r.group(2), r.group(2));
+      r.appendReplacement(sb, Matcher.quoteReplacement(r.group(1) + renamed + r.group(3)));
+    }
+    r.appendTail(sb);
+    return sb.toString();
   }
 
   /** Rounds every number with more than three decimals to three, half up, dropping trailing zeros. */

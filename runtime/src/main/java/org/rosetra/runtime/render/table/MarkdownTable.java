@@ -4,7 +4,7 @@ import static org.rosetra.runtime.render.text.MarkdownText.escape;
 
 import java.util.List;
 
-/** A table as a GitHub-flavoured Markdown table, its title in bold above it. */
+/** A table as a GitHub-flavoured Markdown table, its title in bold above it, numbers to the right. */
 public final class MarkdownTable {
 
   private MarkdownTable() {}
@@ -21,7 +21,8 @@ public final class MarkdownTable {
     }
     sb.append(" |\n| :---");
     for (int i = 0; i < table.columns().size(); i++) {
-      sb.append(" | ---:");
+      boolean numeric = table.column(i).stream().anyMatch(c -> c instanceof Cell.Number);
+      sb.append(numeric ? " | ---:" : " | :---"); // numbers to the right, text to the left
     }
     sb.append(" |\n");
     for (int r = 0; r < body.size(); r++) {

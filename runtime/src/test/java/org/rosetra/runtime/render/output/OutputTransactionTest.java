@@ -98,6 +98,28 @@ class OutputTransactionTest {
   }
 
   @Test
+  void outputsAreNotMadePrivateByTheTemporaryFile() throws IOException {
+    org.junit.jupiter.api.Assumptions.assumeTrue(
+        dir.getFileSystem().supportedFileAttributeViews().contains("posix"));
+    Path plain = Files.writeString(dir.resolve("plain.txt"), "x"); // what the umask gives
+    try (OutputTransaction tx = OutputTransaction.begin(dir)) {
+      tx.write("record.md", "r".getBytes(UTF_8));
+      tx.commit();
+    }
+    assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(dir.resolve("record.md")));
+  }
+
+  @Test
+  void leftoversOfAKilledRunAreRemovedOnCommit() throws IOException {
+    Files.writeString(dir.resolve(".rosetra-record.md.0.part"), "half");
+    try (OutputTransaction tx = OutputTransaction.begin(dir)) {
+      tx.write("record.md", "r".getBytes(UTF_8));
+      tx.commit();
+    }
+    assertEquals(Map.of("", "<dir>", "record.md", "r"), snapshot());
+  }
+
+  @Test
   void pathsMayNotLeaveTheFolder() throws IOException {
     try (OutputTransaction tx = OutputTransaction.begin(dir)) {
       assertThrows(IllegalArgumentException.class, () -> tx.write("../escape.txt", new byte[0]));

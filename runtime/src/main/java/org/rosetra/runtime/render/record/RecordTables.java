@@ -1,0 +1,80 @@
+package org.rosetra.runtime.render.record;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.rosetra.runtime.render.table.Cell;
+import org.rosetra.runtime.render.table.Column;
+import org.rosetra.runtime.render.table.ColumnFormat;
+import org.rosetra.runtime.render.table.ResultTable;
+import org.rosetra.runtime.render.table.Row;
+
+/** The record's own tables, built once so the HTML and the Markdown say exactly the same. */
+final class RecordTables {
+
+  private RecordTables() {}
+
+  static ResultTable checks(List<CheckLine> checks) {
+    List<Row> rows = new ArrayList<>();
+    for (CheckLine c : checks) {
+      rows.add(Row.of(c.label(),
+          Cell.text(c.passed() ? "pass" : "FAIL"),
+          Cell.of(c.utilization()),
+          c.governing().isEmpty() ? Cell.absent() : Cell.text(c.governing()),
+          c.atSeconds().isPresent() ? Cell.of(c.atSeconds().getAsDouble()) : Cell.absent()));
+    }
+    return new ResultTable("Checks", "check",
+        List.of(Column.unitless("result"), Column.unitless("utilization"),
+            Column.unitless("governing"), new Column("at", "s")),
+        rows);
+  }
+
+  static ResultTable declaration(Declaration d) {
+    List<Row> rows = new ArrayList<>();
+    for (Property p : d.properties()) {
+      rows.add(Row.of(p.key(), Cell.text(p.value()), p.unit().isEmpty() ? Cell.absent() : Cell.text(p.unit())));
+    }
+    return new ResultTable(d.kind() + " " + d.name(), "property",
+        List.of(Column.unitless("value"), Column.unitless("unit")), rows);
+  }
+
+  static ResultTable corrections(List<ArmCorrection> corrections, String unit) {
+    List<Row> rows = new ArrayList<>();
+    for (ArmCorrection a : corrections) {
+      rows.add(Row.of(a.caseName(), Cell.text(a.rosette()), Cell.text(a.arm()),
+          Cell.of(a.indicated()), Cell.of(a.afterBridge()), Cell.of(a.thermalRemoved()),
+          Cell.of(a.baselineRemoved()), Cell.of(a.corrected())));
+    }
+    return new ResultTable("Corrections applied to each reading", "case",
+        List.of(Column.unitless("rosette"), Column.unitless("arm"), new Column("indicated", unit),
+            new Column("after bridge, lead and gauge factor", unit),
+            new Column("thermal output removed", unit), new Column("baseline removed", unit),
+            new Column("corrected", unit)),
+        rows);
+  }
+
+  static ResultTable series(List<SeriesInput> series) {
+    List<Row> rows = new ArrayList<>();
+    for (SeriesInput s : series) {
+      // Both ends with one format, so a span reads "0.000 to 120.0" consistently.
+      ColumnFormat f = ColumnFormat.forMagnitude(Math.max(Math.abs(s.timeStart()), Math.abs(s.timeEnd())));
+      String unit = s.timeUnit().isEmpty() ? "" : " " + s.timeUnit();
+      String span = Double.isFinite(s.timeStart()) && Double.isFinite(s.timeEnd())
+          ? f.format(s.timeStart()) + " to " + f.format(s.timeEnd()) + unit
+          : "\u2014";
+      rows.add(Row.of(s.name(), Cell.text(s.file()), Cell.text(s.sha256()), Cell.text(Long.toString(s.rows())),
+          Cell.text(span), Cell.text(s.zero())));
+    }
+    return new ResultTable("Measured series", "series",
+        List.of(Column.unitless("file"), Column.unitless("SHA-256"), Column.unitless("rows"),
+            Column.unitless("time span"), Column.unitless("zero")),
+        rows);
+  }
+
+  static ResultTable inputs(List<InputFile> inputs) {
+    List<Row> rows = new ArrayList<>();
+    for (InputFile f : inputs) {
+      rows.add(Row.of(f.path(), Cell.text(f.sha256())));
+    }
+    return new ResultTable("Input files", "file", List.of(Column.unitless("SHA-256")), rows);
+  }
+}

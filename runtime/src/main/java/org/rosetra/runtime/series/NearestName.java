@@ -1,0 +1,45 @@
+package org.rosetra.runtime.series;
+
+import java.util.List;
+
+/** The name in a list closest to a misspelt one, for "did you mean" hints. */
+final class NearestName {
+
+    private NearestName() {
+    }
+
+    /** The closest name by edit distance, or null when none is close enough to help. */
+    static String in(List<String> names, String wanted) {
+        String best = null;
+        int bestDistance = Integer.MAX_VALUE;
+        for (String name : names) {
+            int d = editDistance(name.toLowerCase(java.util.Locale.ROOT), wanted.toLowerCase(java.util.Locale.ROOT));
+            if (d < bestDistance) {
+                bestDistance = d;
+                best = name;
+            }
+        }
+        // A hint more than half rewritten would mislead more than it helps.
+        return best != null && bestDistance <= Math.max(1, wanted.length() / 2) ? best : null;
+    }
+
+    /** Levenshtein distance: insertions, deletions and substitutions of one character. */
+    static int editDistance(String a, String b) {
+        int[] previous = new int[b.length() + 1];
+        int[] current = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            previous[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            current[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int substitution = previous[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
+                current[j] = Math.min(substitution, Math.min(previous[j], current[j - 1]) + 1);
+            }
+            int[] t = previous;
+            previous = current;
+            current = t;
+        }
+        return previous[b.length()];
+    }
+}
