@@ -14,6 +14,7 @@ import org.rosetra.lang.plan.Outcome;
 import org.rosetra.lang.plan.Output;
 import org.rosetra.lang.plan.Session;
 import org.rosetra.lang.plan.Value;
+import org.rosetra.lang.syntax.JavaCode;
 import org.rosetra.lang.syntax.Let;
 import org.rosetra.lang.syntax.Statement;
 import org.rosetra.runtime.render.table.PlainTextTable;
@@ -146,8 +147,27 @@ public final class Repl {
         }
         kept.removeIf(k -> k.source().equals(source));
         kept.add(new Kept(source, file, text));
-        String warnings = diagnostics.all().isEmpty() ? "" : render(diagnostics, file, text, 0);
-        return warnings + report;
+        List<String> parts = new ArrayList<>();
+        if (!diagnostics.all().isEmpty()) {
+            parts.add(render(diagnostics, file, text, 0).stripTrailing());
+        }
+        if (!report.isEmpty()) {
+            parts.add(report);
+        }
+        parts.addAll(javaNotes(added));
+        return String.join("\n", parts);
+    }
+
+    /** Says at once that a Java function will not run here, rather than at its first call. */
+    private List<String> javaNotes(List<Statement> added) {
+        List<String> notes = new ArrayList<>();
+        for (Statement s : added) {
+            if (!session.javaAllowed() && s instanceof Let let && let.body() instanceof JavaCode) {
+                notes.add("note: function " + let.name().text() + " is written in Java; it runs only in a REPL"
+                        + " started with --allow-java");
+            }
+        }
+        return notes;
     }
 
     /** Shows the value of a bare expression; the session is left as it was. */

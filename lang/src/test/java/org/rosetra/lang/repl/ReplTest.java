@@ -142,4 +142,22 @@ class ReplTest {
         repl.load(script);
         assertEquals("250.0 MPa", enter("limit"));
     }
+
+    @Test
+    void aJavaFunctionIsFlaggedAtOnceWhenJavaIsNotAllowed() {
+        String shown = enter("let doubled(x: stress): stress = java { return 2 * x; }");
+        assertEquals("note: function doubled is written in Java; it runs only in a REPL started with --allow-java",
+                shown);
+        assertTrue(enter("doubled(2 MPa)").contains("run with --allow-java to allow it"));
+    }
+
+    @Test
+    void aJavaFunctionRunsWhenTheSessionAllowsIt() {
+        Session allowed = new Session(folder);
+        allowed.allowJava(true);
+        repl = new Repl(allowed);
+        enter("let doubled(x: stress): stress = java { return 2 * x; }");
+        // Source: the formula itself, 2 * 2 MPa.
+        assertEquals("4.000 MPa", enter("doubled(2 MPa)"));
+    }
 }
