@@ -179,4 +179,22 @@ class JavaFunctionTest {
         // The checker sees it before anything runs.
         assertEquals("parameter x of doubled needs a stress, got an angle", onlyError(outcome).message());
     }
+
+    @Test
+    void aJavaFunctionRunsOverEverySampleOfASeries() throws Exception {
+        // An invented four-sample log of the bracket's rosette.
+        java.nio.file.Files.writeString(folder.resolve("log.csv"),
+                "t_s,g1,g2,g3\n0,100,20,-40\n1,200,40,-80\n2,300,60,-120\n3,150,30,-60\n");
+        // Source: the formula itself, 2 * sigma_1, in Java and in the language.
+        Outcome outcome = run(BRACKET.replaceAll("(?s)case light.*", "") + """
+                series log from "log.csv" {
+                  time    = "t_s" s
+                  arm_top = "g1", "g2", "g3" ue
+                }
+                let twice(s: stress): stress = java { return 2 * s; }
+                let by_java = max(twice(arm_top.sigma_1[log]))
+                let by_language = 2 * max(arm_top.sigma_1[log])
+                """, true);
+        assertEquals(number(outcome, "by_language"), number(outcome, "by_java"), 1e-6);
+    }
 }
