@@ -2,7 +2,6 @@ package org.rosetra.lang.java;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.rosetra.lang.plan.EvaluationException;
 import org.rosetra.lang.plan.Value;
 import org.rosetra.lang.syntax.JavaCode;
@@ -80,14 +79,18 @@ public final class JavaFunctionCall {
     }
 
     private static String kind(Value v) {
-        String simple = v.getClass().getSimpleName();
-        return switch (simple) {
-            case "Rosette", "RosetteInCase" -> "a rosette";
-            case "State" -> "a state";
-            case "MaterialRef" -> "a material";
-            case "Text" -> "text";
-            case "Function" -> "a function";
-            default -> simple.toLowerCase(Locale.ROOT);
-        };
+        if (v instanceof Value.Rosette || v instanceof Value.RosetteInCase) {
+            return "a rosette";
+        }
+        if (v instanceof Value.State) {
+            return "a state";
+        }
+        if (v instanceof Value.MaterialRef) {
+            return "a material";
+        }
+        if (v instanceof Value.Function) {
+            return "a function";
+        }
+        return "text";
     }
 }
