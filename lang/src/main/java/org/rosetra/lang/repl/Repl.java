@@ -181,7 +181,9 @@ public final class Repl {
                 try {
                     Let let = (Let) added.get(0);
                     Value value = outcome.evaluation().let(let.name().text());
-                    shown = valueText(outcome).of(value, let.body(), text.strip());
+                    shown = value instanceof Value.Rosette || value instanceof Value.State
+                            ? tableOf(text.strip(), source, file)
+                            : valueText(outcome).of(value, let.body(), text.strip());
                 } catch (EvaluationException e) {
                     diagnostics.error(e.span(), e.getMessage(), e.hint());
                 }
@@ -192,6 +194,25 @@ public final class Repl {
             return render(diagnostics, file, text, ExpressionEntry.LINES_ADDED);
         }
         return shown;
+    }
+
+    /** A whole rosette or state typed alone shows its standard table, as {@code table NAME} would. */
+    private String tableOf(String name, String source, String file) {
+        String tableSource = source + "-table";
+        Diagnostics diagnostics = new Diagnostics();
+        List<Statement> added = session.submit(tableSource, file, "table " + name, diagnostics);
+        Outcome outcome = diagnostics.hasErrors() ? null : session.evaluate(diagnostics);
+        session.forget(tableSource);
+        if (outcome == null || !outcome.ok()) {
+            return "write table " + name + " to see its results";
+        }
+        List<String> tables = new ArrayList<>();
+        for (Output o : outcome.outputs()) {
+            if (added.stream().anyMatch(s -> s == o.statement())) {
+                tables.add(outputText(o));
+            }
+        }
+        return String.join("\n", tables);
     }
 
     private String report(Outcome outcome, List<Statement> added) {

@@ -80,6 +80,14 @@ class ReplTest {
     }
 
     @Test
+    void aRosetteTypedAloneShowsItsTable() {
+        defineBracket();
+        String shown = enter("arm_top");
+        assertTrue(shown.startsWith("Rosette arm_top"), shown);
+        assertTrue(shown.contains("heavy"), shown);
+    }
+
+    @Test
     void tablesAndVerdictsOfAnEntryArePrinted() {
         defineBracket();
         String table = enter("table arm_top");

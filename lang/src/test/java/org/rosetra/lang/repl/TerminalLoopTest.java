@@ -51,4 +51,28 @@ class TerminalLoopTest {
         assertEquals(Optional.of(folder.resolve(HistoryFile.NAME)), HistoryFile.in(folder.toString()));
         assertFalse(HistoryFile.in("").isPresent());
     }
+
+    @Test
+    void jlineIsGivenTheWordAndTheCandidatesOfTheCompleter() {
+        Session session = new Session(folder);
+        session.submit("s", "s.strain", "material steel {\n  E = 200 GPa\n  nu = 0.3\n}\n",
+                new org.rosetra.lang.check.Diagnostics());
+        ScriptCompleter completer = new ScriptCompleter(session);
+        org.jline.reader.ParsedLine line = new EntryParser(completer)
+                .parse("let e = ste + 1", 11, org.jline.reader.Parser.ParseContext.COMPLETE);
+        assertEquals("ste", line.word());
+        assertEquals(3, line.wordCursor());
+        java.util.List<org.jline.reader.Candidate> candidates = new java.util.ArrayList<>();
+        new CompletionAdapter(completer).complete(null, line, candidates);
+        assertEquals(java.util.List.of("steel"), candidates.stream().map(org.jline.reader.Candidate::value).toList());
+    }
+
+    @Test
+    void anOpenBlockTellsJLineTheEntryGoesOn() {
+        EntryParser parser = new EntryParser(new ScriptCompleter(new Session(folder)));
+        org.junit.jupiter.api.Assertions.assertThrows(org.jline.reader.EOFError.class,
+                () -> parser.parse("material steel {", 16, org.jline.reader.Parser.ParseContext.ACCEPT_LINE));
+        assertEquals("}", parser.parse("material steel {\n}", 18,
+                org.jline.reader.Parser.ParseContext.ACCEPT_LINE).line().substring(17));
+    }
 }
