@@ -1,5 +1,8 @@
 package org.rosetra.lang.cli;
 
+import java.nio.file.Path;
+import org.rosetra.lang.kernel.KernelCommand;
+import org.rosetra.lang.kernel.SessionCellEngine;
 import org.rosetra.lang.repl.ReplCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -23,6 +26,12 @@ public final class Main implements Runnable {
     /** Runs the command line and returns the exit status (0 ran and passed, 1 a check failed, 2 error). */
     public static int execute(String... args) {
         CommandLine line = new CommandLine(new Main());
+        // The kernel serves cells from a session in the folder it was started in. Java-bodied
+        // functions run in it only when the kernel's environment allows them (for instance
+        // "env": {"ROSETRA_ALLOW_JAVA": "1"} in its kernel.json).
+        boolean kernelAllowsJava = "1".equals(System.getenv("ROSETRA_ALLOW_JAVA"));
+        line.addSubcommand("kernel", new KernelCommand(() ->
+                new SessionCellEngine(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version())));
         line.setExecutionExceptionHandler(new UserErrorHandler());
         return line.execute(args);
     }

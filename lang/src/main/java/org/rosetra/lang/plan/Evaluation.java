@@ -166,10 +166,17 @@ public final class Evaluation {
     private java.nio.file.Path folder = java.nio.file.Path.of(".");
     private org.rosetra.runtime.series.ReadOptions readOptions = org.rosetra.runtime.series.ReadOptions.defaults();
 
-    /** Where series files are found, and how they are read (threads, cancel flag, progress). */
-    public void configureSeries(java.nio.file.Path folder, org.rosetra.runtime.series.ReadOptions options) {
+    private java.io.PrintStream progressOut;
+
+    /**
+     * Where series files are found, how they are read (threads, cancel flag), and where a
+     * progress bar is drawn (null: none).
+     */
+    public void configureSeries(java.nio.file.Path folder, org.rosetra.runtime.series.ReadOptions options,
+                                java.io.PrintStream progressOut) {
         this.folder = folder;
         this.readOptions = options;
+        this.progressOut = progressOut;
     }
 
     /** Every series read and reduced, in the order written; read once, on first use. */
@@ -188,7 +195,19 @@ public final class Evaluation {
                             plots.add(p);
                         }
                     }
-                    out.put(spec.name(), new SeriesEvaluation(spec, this, program.checks, reductions, plots).run(readOptions));
+                    var options = readOptions;
+                    org.rosetra.runtime.series.ProgressBar bar = null;
+                    if (progressOut != null) {
+                        bar = new org.rosetra.runtime.series.ProgressBar(progressOut, "reading " + spec.shownName());
+                        options = options.withProgress(bar);
+                    }
+                    try {
+                        out.put(spec.name(), new SeriesEvaluation(spec, this, program.checks, reductions, plots).run(options));
+                    } finally {
+                        if (bar != null) {
+                            bar.finish();
+                        }
+                    }
                 }
             }
             seriesResults = out;

@@ -164,7 +164,7 @@ final class Figures {
         }
         String name = series.spec().name();
         String shownLabel = label.endsWith("[" + name + "]") ? label.substring(0, label.length() - name.length() - 2) : label;
-        Optional<Limit> limit = limitFor(label, evaluation, u, textOf);
+        Optional<Limit> limit = limitFor(label, evaluation, u, textOf).or(() -> limitFor(shownLabel, evaluation, u, textOf));
         History history = new History(shownLabel + ", series " + name, points[0], shown, "s", shownLabel, u.symbol(), limit);
         return figure(plot, shownLabel + " against time, series " + name, shownLabel + "-" + name, new HistoryFigure(history));
     }

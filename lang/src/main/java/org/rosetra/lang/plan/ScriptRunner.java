@@ -57,6 +57,9 @@ public final class ScriptRunner {
             return ERROR;
         }
         loaded.session.allowJava(options.allowJava());
+        if (System.console() != null) {
+            loaded.session.progressTo(err);
+        }
         Diagnostics diagnostics = new Diagnostics();
         loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
         Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);

@@ -59,6 +59,13 @@ public final class Session {
         return allowJava;
     }
 
+    private java.io.PrintStream progressOut;
+
+    /** Draws a progress bar of long series reads here (a terminal's stderr), or nowhere (null). */
+    public void progressTo(java.io.PrintStream out) {
+        this.progressOut = out;
+    }
+
     /** How measured series are read: threads, a cancel flag (for an interrupt), progress. */
     public void readOptions(org.rosetra.runtime.series.ReadOptions options) {
         this.readOptions = options;
@@ -113,6 +120,29 @@ public final class Session {
         return out;
     }
 
+    /** Every name defined so far (declarations, readings, series, values), in order. */
+    public List<String> definedNames() {
+        List<String> names = new ArrayList<>();
+        for (Statement s : statements()) {
+            String key = key(s);
+            if (key != null && !key.startsWith("#")) {
+                names.add(key);
+            }
+        }
+        return names;
+    }
+
+    /** The statement that defines {@code name}, or null. */
+    public Statement definitionOf(String name) {
+        Statement found = null;
+        for (Statement s : statements()) {
+            if (name.equals(key(s))) {
+                found = s;
+            }
+        }
+        return found;
+    }
+
     /** Removes everything that {@code source} defined. */
     public void forget(String source) {
         entries.removeIf(e -> e.source().equals(source));
@@ -135,6 +165,23 @@ public final class Session {
 
     /** Checks every statement in force, then computes it; errors come back as diagnostics. */
     public Outcome evaluate(Diagnostics diagnostics) {
+        return evaluate(diagnostics, s -> true);
+    }
+
+    /**
+     * As {@link #evaluate(Diagnostics)}, drawing only the tables and figures of the output
+     * statements {@code wanted} accepts (a notebook shows the outputs of the cell it ran).
+     */
+    public Outcome evaluate(Diagnostics diagnostics, java.util.function.Predicate<Statement> wanted) {
+        return evaluate(diagnostics, wanted, true);
+    }
+
+    /**
+     * As above; with {@code everything} false only the checks and outputs {@code wanted}
+     * accepts are computed and no {@link RunResults} are collected (a notebook cell shows its
+     * own outputs: the rest of the session is computed only as far as they need it).
+     */
+    public Outcome evaluate(Diagnostics diagnostics, java.util.function.Predicate<Statement> wanted, boolean everything) {
         List<Statement> all = statements();
         Script whole = new Script("(session)", all);
         CheckerBridge.check(whole, diagnostics);
@@ -144,15 +191,17 @@ public final class Session {
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
         evaluation.allowJava(allowJava);
-        evaluation.configureSeries(folder, readOptions);
+        evaluation.configureSeries(folder, readOptions, progressOut);
         try {
             List<CheckResult> checks = new ArrayList<>();
             for (var check : program.checks()) {
-                checks.add(Checks.test(check, evaluation));
+                if (everything || wanted.test(check)) {
+                    checks.add(Checks.test(check, evaluation));
+                }
             }
-            RunResults results = ResultsBuilder.build(evaluation, checks);
+            RunResults results = everything ? ResultsBuilder.build(evaluation, checks) : null;
             OutputBuilder builder = new OutputBuilder(evaluation, this);
-            List<Output> outputs = builder.build(program.outputs());
+            List<Output> outputs = builder.build(program.outputs().stream().filter(wanted).toList());
             return new Outcome(diagnostics, results, outputs, checks, evaluation, builder.display());
         } catch (EvaluationException e) {
             diagnostics.error(e.span(), e.getMessage(), e.hint());
@@ -245,6 +294,9 @@ public final class Session {
         }
         if (s instanceof Report) {
             return "#report";
+        }
+        if (s instanceof org.rosetra.lang.syntax.Check c) {
+            return "#check " + c.label().value();
         }
         return null;
     }

@@ -1,0 +1,163 @@
+package org.rosetra.lang.kernel;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Base64;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.concurrent.atomic.AtomicBoolean;
+import org.rosetra.lang.check.Builtins;
+import org.rosetra.lang.check.Diagnostics;
+import org.rosetra.lang.plan.CheckResult;
+import org.rosetra.lang.plan.Outcome;
+import org.rosetra.lang.plan.Output;
+import org.rosetra.lang.plan.Session;
+import org.rosetra.lang.syntax.ScriptParser;
+import org.rosetra.lang.syntax.Statement;
+import org.rosetra.runtime.render.table.HtmlTable;
+import org.rosetra.runtime.render.table.PlainTextTable;
+import org.rosetra.runtime.series.ReadOptions;
+import org.rosetra.runtime.series.SeriesCancelledException;
+
+/**
+ * The notebook kernel's view of a language session: every cell is submitted to one
+ * {@link Session} that lives as long as the kernel; a re-run cell replaces what it defined.
+ */
+public final class SessionCellEngine implements CellEngine {
+    private final Session session;
+    private final AtomicBoolean cancel = new AtomicBoolean();
+    private final String version;
+    private int cells;
+
+    public SessionCellEngine(Path folder, boolean allowJava, String version) {
+        this.session = new Session(folder);
+        this.session.allowJava(allowJava);
+        this.session.readOptions(ReadOptions.defaults().withCancel(cancel));
+        this.version = version;
+    }
+
+    @Override
+    public CellOutcome execute(String code, OutputSink sink) {
+        cancel.set(false);
+        cells++;
+        String source = "cell " + cells;
+        String file = "<cell " + cells + ">";
+        Diagnostics diagnostics = new Diagnostics();
+        List<Statement> statements = session.submit(source, file, code, diagnostics);
+        if (diagnostics.hasErrors()) {
+            return failure(diagnostics);
+        }
+        Set<Statement> mine = java.util.Collections.newSetFromMap(new IdentityHashMap<>());
+        mine.addAll(statements);
+        Outcome outcome;
+        try {
+            outcome = session.evaluate(diagnostics, mine::contains, false);
+        } catch (SeriesCancelledException e) {
+            return CellOutcome.failed("Interrupted", "the cell was stopped while reading a series", List.of(
+                    "the cell was stopped while reading a series; nothing it computed was kept"));
+        }
+        if (!outcome.ok()) {
+            session.forget(source);
+            return failure(diagnostics);
+        }
+        for (Output o : outcome.outputs()) {
+            sink.display(bundleOf(o));
+        }
+        StringBuilder verdicts = new StringBuilder();
+        for (CheckResult c : outcome.checks()) {
+            if (mine.contains(c.check())) {
+                verdicts.append(verdict(c)).append('\n');
+            }
+        }
+        if (verdicts.length() > 0) {
+            sink.display(MimeBundle.plain(verdicts.toString().replace("**", "")).with("text/markdown", verdicts.toString()));
+        }
+        return CellOutcome.nothingToShow();
+    }
+
+    static MimeBundle bundleOf(Output o) {
+        if (o instanceof Output.TableOutput t) {
+            return MimeBundle.plain(PlainTextTable.render(t.table()))
+                    .with("text/html", HtmlTable.render(t.table()));
+        }
+        Output.FigureOutput f = (Output.FigureOutput) o;
+        return MimeBundle.plain(f.caption())
+                .with("image/svg+xml", f.figure().svgText())
+                .with("image/png", Base64.getEncoder().encodeToString(f.figure().png()));
+    }
+
+    private static String verdict(CheckResult c) {
+        StringBuilder s = new StringBuilder(c.passes() ? "**pass**" : "**FAIL**");
+        s.append(" \u2014 check \"").append(c.check().label().value()).append('"');
+        if (c.unbounded()) {
+            s.append(": utilization unbounded (the limit is zero)");
+        } else if (!Double.isNaN(c.highest())) {
+            s.append(String.format(Locale.ROOT, ": utilization %.3f", c.highest()));
+        }
+        if (c.governingName() != null) {
+            s.append(", governing ").append(c.governingName());
+        }
+        if (c.at() != null) {
+            s.append(String.format(Locale.ROOT, " at %.3f s", c.at()));
+        }
+        return s.toString();
+    }
+
+    private CellOutcome failure(Diagnostics diagnostics) {
+        String rendered = diagnostics.render(session::sourceOf);
+        List<String> lines = new ArrayList<>(List.of(rendered.split("\n")));
+        String first = diagnostics.sorted().stream().filter(d -> d.severity().name().equals("ERROR"))
+                .map(d -> d.message()).findFirst().orElse("error");
+        return CellOutcome.failed("Error", first, lines);
+    }
+
+    @Override
+    public CompletionResult complete(String code, int cursorPos) {
+        return CellCompletion.complete(session, code, cursorPos);
+    }
+
+    @Override
+    public InspectionResult inspect(String code, int cursorPos, int detailLevel) {
+        String word = CellCompletion.wordAt(code, cursorPos);
+        if (word.isEmpty()) {
+            return InspectionResult.notFound();
+        }
+        var member = Builtins.resultMember(word);
+        if (member.isPresent()) {
+            var m = member.get();
+            String text = word + " (member of a rosette's result, " + m.kind() + "): " + m.doc();
+            return InspectionResult.of(MimeBundle.plain(text).with("text/markdown", "**" + word + "** \u2014 " + m.doc()));
+        }
+        var function = Builtins.function(word);
+        if (function.isPresent()) {
+            var f = function.get();
+            String text = f.signature() + ": " + f.doc();
+            return InspectionResult.of(MimeBundle.plain(text).with("text/markdown", "`" + f.signature() + "` \u2014 " + f.doc()));
+        }
+        String definition = CellCompletion.definitionOf(session, word);
+        if (definition != null) {
+            return InspectionResult.of(MimeBundle.plain(definition).with("text/markdown", "```\n" + definition + "\n```"));
+        }
+        return InspectionResult.notFound();
+    }
+
+    @Override
+    public Completeness isComplete(String code) {
+        if (code.isBlank()) {
+            return Completeness.complete();
+        }
+        return ScriptParser.isComplete(code) ? Completeness.complete() : Completeness.incomplete("  ");
+    }
+
+    @Override
+    public void interrupt() {
+        cancel.set(true);
+    }
+
+    @Override
+    public String languageVersion() {
+        return version;
+    }
+}
