@@ -1,5 +1,6 @@
 package org.rosetra.lang.java;
 
+import org.rosetra.lang.check.Builtins;
 import org.rosetra.lang.check.NearestName;
 import org.rosetra.lang.plan.EvaluationException;
 import org.rosetra.lang.syntax.Name;
@@ -15,12 +16,12 @@ final class DeclaredDimension {
         if (name == null) {
             return whenAbsent;
         }
-        return Dimension.named(name.text()).orElseThrow(() -> new EvaluationException(name.span(),
+        return Builtins.dimensionNamed(name.text()).orElseThrow(() -> new EvaluationException(name.span(),
                 "unknown dimension '" + name.text() + "'", hintFor(name.text())));
     }
 
     private static String hintFor(String wrong) {
-        String nearest = NearestName.hint(wrong, Dimension.namedDimensions().keySet());
+        String nearest = NearestName.hint(wrong, Builtins.dimensionNames());
         return nearest != null ? nearest
                 : "dimensions are named as in: none, stress, angle, temperature, length, force";
     }

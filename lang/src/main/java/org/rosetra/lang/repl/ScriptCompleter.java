@@ -7,7 +7,6 @@ import java.util.function.Supplier;
 import java.util.regex.Pattern;
 import org.rosetra.lang.plan.Session;
 import org.rosetra.lang.syntax.Statement;
-import org.rosetra.runtime.results.RosetteMember;
 import org.rosetra.runtime.units.Units;
 
 /**
@@ -68,7 +67,7 @@ public final class ScriptCompleter {
         SessionNames names = SessionNames.of(statements.get());
         if (start > 0 && before.charAt(start - 1) == '.') {
             String target = OpenBlock.wordBeforeDot(before, start - 1);
-            return names.materials().contains(target) ? Vocabulary.MATERIAL_MEMBERS : rosetteMembers();
+            return names.materials().contains(target) ? Vocabulary.MATERIAL_MEMBERS : Vocabulary.resultMembers();
         }
         if (AFTER_NUMBER.matcher(before.substring(0, start)).find()) {
             return Units.symbols();
@@ -78,7 +77,7 @@ public final class ScriptCompleter {
         }
         List<String> all = new ArrayList<>();
         if (lead.isBlank() && block != null) {
-            all.addAll(Vocabulary.FIELDS.getOrDefault(block, List.of()));
+            all.addAll(Vocabulary.fields(block));
             if (block.equals("case") || block.equals("baseline") || block.equals("series")) {
                 all.addAll(names.rosettes());
             }
@@ -88,17 +87,9 @@ public final class ScriptCompleter {
             all.addAll(Vocabulary.STATEMENT_KEYWORDS);
         }
         all.addAll(names.all());
-        all.addAll(Vocabulary.FUNCTIONS);
+        all.addAll(Vocabulary.functions());
         all.addAll(Vocabulary.WORDS);
         return all;
-    }
-
-    private static List<String> rosetteMembers() {
-        List<String> members = new ArrayList<>();
-        for (RosetteMember m : RosetteMember.values()) {
-            members.add(m.scriptName());
-        }
-        return members;
     }
 
     /** Candidates that start with the prefix, each once, keeping the order given. */

@@ -1,9 +1,17 @@
 package org.rosetra.lang.repl;
 
 import java.util.List;
-import java.util.Map;
+import java.util.Locale;
+import org.rosetra.lang.check.BlockKind;
+import org.rosetra.lang.check.BuiltinFunction;
+import org.rosetra.lang.check.BuiltinMember;
+import org.rosetra.lang.check.Builtins;
+import org.rosetra.lang.check.FieldSpec;
 
-/** The language's fixed words, for telling statements from expressions and for completion. */
+/**
+ * The language's fixed words, for telling statements from expressions and for completion.
+ * Functions, members and fields come from the checker's registry, so they never drift apart.
+ */
 final class Vocabulary {
     private Vocabulary() {
     }
@@ -12,11 +20,6 @@ final class Vocabulary {
     static final List<String> STATEMENT_KEYWORDS = List.of(
             "title", "material", "gauge", "rosette", "strain", "stress", "baseline", "case", "combine",
             "series", "let", "check", "table", "plot", "report", "use", "display");
-
-    /** Functions every script can call. */
-    static final List<String> FUNCTIONS = List.of(
-            "sqrt", "abs", "sin", "cos", "tan", "atan2", "min", "max",
-            "strain_at", "shear_at", "stress_at", "shear_stress_at", "mohr_coulomb", "rankine");
 
     /** Words that stand as field values or after a keyword. */
     static final List<String> WORDS = List.of(
@@ -27,19 +30,27 @@ final class Vocabulary {
     static final List<String> MATERIAL_MEMBERS = List.of(
             "E", "nu", "G", "yield", "yield_c", "ultimate", "ultimate_c");
 
-    /** The fields each kind of block takes; reading blocks also take one line per rosette. */
-    static final Map<String, List<String>> FIELDS = Map.of(
-            "material", MATERIAL_MEMBERS,
-            "gauge", List.of("factor", "transverse", "nu0", "resistance", "thermal", "thermal_factor"),
-            "rosette", List.of("layout", "gauge", "material", "state", "angle", "bridge", "lead",
-                    "instrument_factor"),
-            "strain", List.of("eps_x", "eps_y", "gamma_xy", "material", "state"),
-            "stress", List.of("sigma_x", "sigma_y", "tau_xy", "material", "state"),
-            "baseline", List.of("temperature"),
-            "case", List.of("temperature"),
-            "series", List.of("time", "temperature", "zero"));
-
     static boolean isStatementKeyword(String word) {
         return STATEMENT_KEYWORDS.contains(word);
+    }
+
+    /** Functions every script can call. */
+    static List<String> functions() {
+        return Builtins.functions().stream().map(BuiltinFunction::name).toList();
+    }
+
+    /** The members of a rosette's (or a state's) result. */
+    static List<String> resultMembers() {
+        return Builtins.resultMembers().stream().map(BuiltinMember::name).toList();
+    }
+
+    /** The fields of a block opened by {@code keyword}; none for a word that opens no block. */
+    static List<String> fields(String keyword) {
+        try {
+            BlockKind kind = BlockKind.valueOf(keyword.toUpperCase(Locale.ROOT));
+            return Builtins.fields(kind).stream().map(FieldSpec::name).toList();
+        } catch (IllegalArgumentException notABlock) {
+            return List.of();
+        }
     }
 }

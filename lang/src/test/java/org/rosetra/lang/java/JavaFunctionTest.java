@@ -197,4 +197,14 @@ class JavaFunctionTest {
                 """, true);
         assertEquals(number(outcome, "by_language"), number(outcome, "by_java"), 1e-6);
     }
+
+    @Test
+    void strainIsADimensionNameAJavaFunctionMayUse() {
+        // Source: 500 ue = 500e-6, the definition of microstrain (common practice).
+        Outcome outcome = run("""
+                let halved(e: strain): strain = java { e / 2 }
+                let h = halved(1000 ue)
+                """, true);
+        assertEquals(500e-6, number(outcome, "h"), 1e-15);
+    }
 }
