@@ -48,7 +48,8 @@ public final class JavaFunctionCall {
     /** The error for a Java function when the user has not allowed Java. */
     public static EvaluationException notAllowed(JavaCode code) {
         return new EvaluationException(code.span(), "this script defines a function in Java (line "
-                + code.span().line() + "); run with --allow-java to allow it, only for scripts you trust");
+                + code.span().line() + "); run with --allow-java to allow it, only for scripts you trust",
+                "in a notebook, the kernel allows it when started with ROSETRA_ALLOW_JAVA=1 (the env of its kernel.json)");
     }
 
     private static void checkArgument(String function, int index, Param p, Value argument, SourceSpan callSite) {
