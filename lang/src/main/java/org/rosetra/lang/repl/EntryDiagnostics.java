@@ -20,7 +20,8 @@ final class EntryDiagnostics {
     static Diagnostics placed(Diagnostics diagnostics, String file, int linesAdded, int lineCount) {
         Diagnostics placed = new Diagnostics();
         for (Diagnostic d : diagnostics.all()) {
-            placed.report(d.severity(), place(d.span(), file, linesAdded, lineCount), d.message(), d.hint());
+            String message = linesAdded > 0 ? ExpressionEntry.inUserTerms(d.message()) : d.message();
+            placed.report(d.severity(), place(d.span(), file, linesAdded, lineCount), message, d.hint());
         }
         return placed;
     }

@@ -88,7 +88,9 @@ final class EntryRunner {
         }
         session.forget(source);
         if (diagnostics.hasErrors()) {
-            return render(diagnostics, file, text, ExpressionEntry.LINES_ADDED);
+            String shownErrors = render(diagnostics, file, text, ExpressionEntry.LINES_ADDED);
+            return ExpressionEntry.looksLikeAnAssignment(text)
+                    ? shownErrors + "  hint: to name a value, write let " + text.strip() + "\n" : shownErrors;
         }
         return shown;
     }

@@ -168,4 +168,13 @@ class ReplTest {
         // Source: the formula itself, 2 * 2 MPa.
         assertEquals("4.000 MPa", enter("doubled(2 MPa)"));
     }
+
+    @Test
+    void anAssignmentWithoutLetGetsAHintAndTheWrapperStaysHidden() {
+        String shown = enter("x = 3");
+        assertTrue(shown.contains("hint: to name a value, write let x = 3"), shown);
+        assertFalse(shown.contains("')'"), shown);
+        assertFalse(shown.contains("_value_of_entry"), shown);
+        assertTrue(enter("foo bar").contains("expected the end of the expression, found 'bar'"));
+    }
 }
