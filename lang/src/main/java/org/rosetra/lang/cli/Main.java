@@ -3,6 +3,7 @@ package org.rosetra.lang.cli;
 import java.nio.file.Path;
 import org.rosetra.lang.kernel.KernelCommand;
 import org.rosetra.lang.kernel.SessionCellEngine;
+import org.rosetra.lang.repl.ReplCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -12,7 +13,8 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Reduces strain-gauge rosette measurements written as a checked script.",
-        subcommands = {RunCommand.class, CheckCommand.class, VerifyCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, CheckCommand.class, VerifyCommand.class, ReplCommand.class,
+                CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

@@ -192,6 +192,7 @@ public final class Session {
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
+        evaluation.allowJava(allowJava);
         evaluation.configureSeries(folder, readOptions, progressOut);
         try {
             List<CheckResult> checks = new ArrayList<>();
