@@ -29,7 +29,7 @@ final class EntryReport {
         parts.addAll(outputs(outcome, added));
         for (CheckResult c : outcome.checks()) {
             if (added.stream().anyMatch(s -> s == c.check())) {
-                parts.add(Verdicts.of(c));
+                parts.add(org.rosetra.lang.plan.ScriptRunner.verdict(c));
             }
         }
         return String.join("\n", parts);
@@ -55,7 +55,7 @@ final class EntryReport {
     }
 
     static ValueText valueText(Outcome outcome) {
-        return new ValueText(DisplayChoice.of(outcome.evaluation().program().displays()),
+        return new ValueText(outcome.display(),
                 outcome.evaluation().axis());
     }
 

@@ -28,6 +28,13 @@ final class EntryRunner {
         this.session = session;
     }
 
+    /** Only the outputs and checks of this entry are drawn and tested; the rest only as they need. */
+    private static java.util.function.Predicate<Statement> only(List<Statement> added) {
+        java.util.Set<Statement> mine = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
+        mine.addAll(added);
+        return mine::contains;
+    }
+
     /** Forgets every entry kept so far. */
     void reset() {
         kept.forEach(k -> session.forget(k.source()));
@@ -41,7 +48,7 @@ final class EntryRunner {
         if (diagnostics.hasErrors()) {
             return render(diagnostics, file, text, 0);
         }
-        Outcome outcome = session.evaluate(diagnostics);
+        Outcome outcome = session.evaluate(diagnostics, only(added), false);
         String report = null;
         if (outcome.ok()) {
             try {
@@ -73,7 +80,7 @@ final class EntryRunner {
         List<Statement> added = session.submit(source, file, ExpressionEntry.wrap(text, number), diagnostics);
         String shown = null;
         if (!diagnostics.hasErrors()) {
-            Outcome outcome = session.evaluate(diagnostics);
+            Outcome outcome = session.evaluate(diagnostics, statement -> false, false);
             if (outcome.ok()) {
                 try {
                     Let let = (Let) added.get(0);
@@ -100,7 +107,7 @@ final class EntryRunner {
         String tableSource = source + "-table";
         Diagnostics diagnostics = new Diagnostics();
         List<Statement> added = session.submit(tableSource, file, "table " + name, diagnostics);
-        Outcome outcome = diagnostics.hasErrors() ? null : session.evaluate(diagnostics);
+        Outcome outcome = diagnostics.hasErrors() ? null : session.evaluate(diagnostics, only(added), false);
         session.forget(tableSource);
         if (outcome == null || !outcome.ok()) {
             return "write table " + name + " to see its results";
