@@ -31,7 +31,7 @@ public final class Main implements Runnable {
         // "env": {"ROSETRA_ALLOW_JAVA": "1"} in its kernel.json).
         boolean kernelAllowsJava = "1".equals(System.getenv("ROSETRA_ALLOW_JAVA"));
         line.addSubcommand("kernel", new KernelCommand(() ->
-                new SessionCellEngine(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version())));
+                SessionCellEngine.warmedUp(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version(), 1500)));
         line.setExecutionExceptionHandler(new UserErrorHandler());
         return line.execute(args);
     }
