@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -85,6 +86,27 @@ class RecordNoLossTest {
         assertEquals(good.keySet(), now.keySet());
         assertTrue(Files.readString(out.resolve("results.json")).contains("\"pass\" : false"));
         assertFalse(Files.readString(out.resolve("record.md")).contains("Every check passed."));
+    }
+
+    @Test
+    @Disabled("BUG: OutputTransaction.removeStale deletes every file in plots/ and tables/ that the run "
+            + "did not write, including a user's own files when --out names a folder the tool did not make")
+    void aRunDeletesOnlyFilesThatAnEarlierRunWrote() throws IOException {
+        Path folder = dir.resolve("site");
+        Files.createDirectories(folder.resolve("tables"));
+        Files.writeString(folder.resolve("tables/survey-notes.csv"), "arm,note\na,kept by hand\n");
+        assertEquals(0, rosetra("run", script.toString(), "--out", folder.toString()).status());
+        assertTrue(Files.exists(folder.resolve("tables/survey-notes.csv")), "the user's own file is gone");
+    }
+
+    @Test
+    void anOutputFolderThatIsAFileIsAnErrorAndTheFileStays() throws IOException {
+        Path file = dir.resolve("not-a-folder");
+        Files.writeString(file, "keep");
+        Run r = rosetra("run", script.toString(), "--out", file.toString());
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("rosetra: error: cannot write the outputs"), r.err());
+        assertEquals("keep", Files.readString(file));
     }
 
     private void edit(String from, String to) throws IOException {
