@@ -100,6 +100,20 @@ class RecordNoLossTest {
     }
 
     @Test
+    @Disabled("BUG: OutputTransaction.commit renames file by file; when one rename fails (here record.md "
+            + "is a folder) the files renamed before it are new and the rest old: record.html shows the new "
+            + "readings while results.json still holds the old ones")
+    void aCommitThatFailsHalfWayLeavesNoMixOfOldAndNew() throws IOException {
+        Files.delete(out.resolve("record.md"));
+        Files.createDirectories(out.resolve("record.md/in-the-way"));
+        Map<String, byte[]> before = snapshot(out);
+        edit("web = 780, 380, -210 ue", "web = 790, 380, -210 ue");
+        Run r = rosetra("run", script.toString());
+        assertEquals(2, r.status(), r.out());
+        RecordDeterminismTest.assertSameTreeOf(before, snapshot(out));
+    }
+
+    @Test
     void anOutputFolderThatIsAFileIsAnErrorAndTheFileStays() throws IOException {
         Path file = dir.resolve("not-a-folder");
         Files.writeString(file, "keep");
