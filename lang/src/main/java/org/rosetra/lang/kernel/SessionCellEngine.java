@@ -126,7 +126,7 @@ public final class SessionCellEngine implements CellEngine {
         if (c.unbounded()) {
             s.append(": utilization unbounded (the limit is zero)");
         } else if (!Double.isNaN(c.highest())) {
-            s.append(String.format(Locale.ROOT, ": utilization %.3f", c.highest()));
+            s.append(": utilization ").append(org.rosetra.runtime.render.text.UtilizationText.of(c.highest()));
         }
         if (c.governingName() != null) {
             s.append(", governing ").append(c.governingName());

@@ -77,6 +77,10 @@ public final class RecordBuilder {
 
         List<RecordItem> items = new ArrayList<>();
         Set<String> used = new HashSet<>();
+        ResultTable values = valuesTable(outcome, display);
+        if (values != null) {
+            items.add(new RecordItem.TableItem(unique("values", used), values));
+        }
         for (Output o : outcome.outputs()) {
             if (o instanceof Output.TableOutput t) {
                 items.add(new RecordItem.TableItem(unique(t.name(), used), t.table()));
@@ -148,6 +152,27 @@ public final class RecordBuilder {
             }
         }
         return new org.rosetra.runtime.render.record.Declaration(d.kind().keyword(), d.name().text(), properties);
+    }
+
+    /** Every named value that is a number, as the checks used it, in display units. */
+    private static ResultTable valuesTable(Outcome outcome, DisplayUnits display) {
+        List<Row> rows = new ArrayList<>();
+        for (var e : outcome.results().values().entrySet()) {
+            Dimension d = Dimension.named(e.getValue().dimension()).orElse(null);
+            double si = e.getValue().value();
+            if (d == null || d.isNone()) {
+                rows.add(Row.of(e.getKey(), Cell.of(si), Cell.absent()));
+            } else if (d.equals(Dimension.ANGLE)) {
+                rows.add(Row.of(e.getKey(), Cell.of(si), Cell.text("deg")));
+            } else {
+                Unit u = display.unitFor(d);
+                rows.add(Row.of(e.getKey(), Cell.of(u.fromSi(si)), Cell.text(u.symbol())));
+            }
+        }
+        if (rows.isEmpty()) {
+            return null;
+        }
+        return new ResultTable("Named values", "value", List.of(Column.unitless("value"), Column.unitless("unit")), rows);
     }
 
     private static String format(double v) {

@@ -19,6 +19,11 @@ public final class ResultsFlattener {
             return out;
         }
         Map<String, Object> root = (Map<String, Object>) tree;
+        out.put("format", root.get("format"));
+        out.put("title", root.get("title"));
+        out.put("cases", root.get("cases") == null ? null : String.join(", ", ((List<Object>) root.get("cases")).stream().map(String::valueOf).toList()));
+        forEachMap(root.get("rosettes"), (rosette, body) ->
+                out.put(rosette + ".state", ((Map<String, Object>) body).get("state")));
         forEachMap(root.get("rosettes"), (rosette, body) ->
                 forEachMap(((Map<String, Object>) body).get("results"), (kase, members) ->
                         forEachMap(members, (member, value) ->

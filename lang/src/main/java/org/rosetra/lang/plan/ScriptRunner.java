@@ -160,7 +160,7 @@ public final class ScriptRunner {
         if (c.unbounded()) {
             s.append("  utilization unbounded (the limit is zero)");
         } else if (!Double.isNaN(c.highest())) {
-            s.append(String.format(Locale.ROOT, "  utilization %.3f", c.highest()));
+            s.append("  utilization ").append(org.rosetra.runtime.render.text.UtilizationText.of(c.highest()));
         } else {
             s.append("  (no case defines it)");
         }

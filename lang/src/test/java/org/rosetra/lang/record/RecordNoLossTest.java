@@ -89,8 +89,6 @@ class RecordNoLossTest {
     }
 
     @Test
-    @Disabled("BUG: OutputTransaction.removeStale deletes every file in plots/ and tables/ that the run "
-            + "did not write, including a user's own files when --out names a folder the tool did not make")
     void aRunDeletesOnlyFilesThatAnEarlierRunWrote() throws IOException {
         Path folder = dir.resolve("site");
         Files.createDirectories(folder.resolve("tables"));

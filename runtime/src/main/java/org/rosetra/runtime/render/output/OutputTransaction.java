@@ -74,19 +74,109 @@ public final class OutputTransaction implements AutoCloseable {
     }
   }
 
-  /** Moves every staged file into place and removes the managed files this run did not write. */
+  /**
+   * Moves every staged file into place and removes the managed files the previous run wrote and
+   * this one did not. When a move fails, the files already moved get their previous contents
+   * back, so the folder is the old one or the new one, not a mix of both.
+   */
   public void commit() throws IOException {
     requireOpen();
+    writeManifest();
+    Map<Path, Path> backups = new LinkedHashMap<>();
+    List<Path> moved = new ArrayList<>();
     try {
+      for (Path target : staged.keySet()) {
+        if (Files.isDirectory(target)) {
+          throw new IOException("cannot write " + root.relativize(target) + ": a folder of that name is in the way");
+        }
+      }
+      for (Path target : staged.keySet()) {
+        if (Files.isRegularFile(target)) {
+          Path backup = createTemp(target);
+          Files.copy(target, backup, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.COPY_ATTRIBUTES);
+          backups.put(target, backup);
+        }
+      }
       for (Map.Entry<Path, Path> e : staged.entrySet()) {
         move(e.getValue(), e.getKey());
+        moved.add(e.getKey());
       }
-      removeStale();
-    } finally {
+    } catch (IOException | RuntimeException failure) {
+      restore(moved, backups, failure);
       finished = true;
-      deleteTemps(); // only those a failed move left behind
+      deleteTemps();
+      deleteAll(backups.values());
+      throw failure;
+    }
+    finished = true;
+    deleteAll(backups.values());
+    deleteTemps(); // none should be left
+    removeStale();
+  }
+
+  /** Puts back what the moved files replaced, and removes the ones that were new. */
+  private void restore(List<Path> moved, Map<Path, Path> backups, Exception failure) {
+    for (Path target : moved) {
+      try {
+        Path backup = backups.get(target);
+        if (backup != null) {
+          move(backup, target);
+        } else {
+          Files.deleteIfExists(target);
+        }
+      } catch (IOException e) {
+        failure.addSuppressed(e);
+      }
     }
   }
+
+  private static void deleteAll(java.util.Collection<Path> files) {
+    for (Path p : files) {
+      try {
+        Files.deleteIfExists(p);
+      } catch (IOException ignored) {
+        // a leftover temporary file is removed by the next run's commit
+      }
+    }
+  }
+
+  /**
+   * The list of files this run writes, kept in the folder: the next run removes from the
+   * managed subfolders only files this list names, never a file someone else put there.
+   */
+  private void writeManifest() throws IOException {
+    List<String> names = new ArrayList<>();
+    for (Path target : staged.keySet()) {
+      names.add(root.relativize(target).toString().replace('\\', '/'));
+    }
+    names.add(MANIFEST);
+    java.util.Collections.sort(names);
+    Path target = root.resolve(MANIFEST);
+    Path temp = createTemp(target);
+    Files.writeString(temp, String.join("\n", names) + "\n", java.nio.charset.StandardCharsets.UTF_8);
+    previousManifest = readManifest(target);
+    staged.put(target, temp);
+  }
+
+  private List<Path> readManifest(Path file) throws IOException {
+    List<Path> files = new ArrayList<>();
+    if (!Files.isRegularFile(file)) {
+      return files;
+    }
+    for (String line : Files.readAllLines(file, java.nio.charset.StandardCharsets.UTF_8)) {
+      if (!line.isBlank()) {
+        Path p = root.resolve(line.strip()).normalize();
+        if (p.startsWith(root)) {
+          files.add(p);
+        }
+      }
+    }
+    return files;
+  }
+
+  /** The folder's list of files written by a run of the tool. */
+  public static final String MANIFEST = ".rosetra.files";
+  private List<Path> previousManifest = List.of();
 
   /** Drops every staged file; the folder is left as it was before {@link #begin}. */
   public void abort() {
@@ -139,24 +229,19 @@ public final class OutputTransaction implements AutoCloseable {
 
   private void removeStale() throws IOException {
     Set<Path> written = staged.keySet();
-    for (String name : MANAGED_FOLDERS) {
-      Path folder = root.resolve(name);
-      if (!Files.isDirectory(folder)) {
-        continue;
-      }
-      List<Path> stale = new ArrayList<>();
-      try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder)) {
-        for (Path p : entries) {
-          if (Files.isRegularFile(p) && !written.contains(p)) {
-            stale.add(p);
-          }
-        }
-      }
-      for (Path p : stale) {
+    for (Path p : previousManifest) {
+      boolean managed = MANAGED_FOLDERS.stream().anyMatch(name -> p.getParent() != null
+          && p.getParent().equals(root.resolve(name)));
+      if (managed && !written.contains(p) && Files.isRegularFile(p)) {
         Files.deleteIfExists(p);
       }
     }
     removeLeftoverTemps(root); // from a run that was killed before it could clean up
+    for (String name : MANAGED_FOLDERS) {
+      if (Files.isDirectory(root.resolve(name))) {
+        removeLeftoverTemps(root.resolve(name));
+      }
+    }
   }
 
   private void removeLeftoverTemps(Path folder) throws IOException {

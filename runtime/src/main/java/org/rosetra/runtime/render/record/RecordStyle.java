@@ -41,7 +41,7 @@ final class RecordStyle {
           "@media print {",
           "  body { max-width: none; padding: 0; font-size: 10pt; }",
           "  table, figure, .caution { break-inside: avoid; page-break-inside: avoid; }",
-          "  h2, h3, caption { break-after: avoid; page-break-after: avoid; }",
+          "  h2, h3, caption, h2 + p, h3 + p { break-after: avoid; page-break-after: avoid; }",
           "  figure svg { max-height: 24cm; }",
           "}",
           "");

@@ -1,5 +1,6 @@
 package org.rosetra.runtime.render.record;
 
+import org.rosetra.runtime.render.text.UtilizationText;
 import java.util.ArrayList;
 import java.util.List;
 import org.rosetra.runtime.render.table.Cell;
@@ -14,27 +15,37 @@ final class RecordTables {
   private RecordTables() {}
 
   static ResultTable checks(List<CheckLine> checks) {
+    boolean anyTime = checks.stream().anyMatch(c -> c.atSeconds().isPresent());
     List<Row> rows = new ArrayList<>();
     for (CheckLine c : checks) {
-      rows.add(Row.of(c.label(),
+      List<Cell> cells = new ArrayList<>(List.of(
           Cell.text(c.passed() ? "pass" : "FAIL"),
-          Cell.of(c.utilization()),
-          c.governing().isEmpty() ? Cell.absent() : Cell.text(c.governing()),
-          c.atSeconds().isPresent() ? Cell.of(c.atSeconds().getAsDouble()) : Cell.absent()));
+          Double.isNaN(c.utilization()) ? Cell.absent() : Cell.text(UtilizationText.of(c.utilization())),
+          c.governing().isEmpty() ? Cell.absent() : Cell.text(c.governing())));
+      if (anyTime) {
+        cells.add(c.atSeconds().isPresent() ? Cell.of(c.atSeconds().getAsDouble()) : Cell.absent());
+      }
+      rows.add(new Row(c.label(), cells));
     }
-    return new ResultTable("Checks", "check",
-        List.of(Column.unitless("result"), Column.unitless("utilization"),
-            Column.unitless("governing"), new Column("at", "s")),
-        rows);
+    List<Column> columns = new ArrayList<>(List.of(Column.unitless("result"), Column.unitless("utilization"),
+        Column.unitless("governing")));
+    if (anyTime) {
+      columns.add(new Column("at", "s"));
+    }
+    return new ResultTable("Checks", "check", columns, rows);
   }
 
   static ResultTable declaration(Declaration d) {
+    boolean anyUnit = d.properties().stream().anyMatch(p -> !p.unit().isEmpty());
     List<Row> rows = new ArrayList<>();
     for (Property p : d.properties()) {
-      rows.add(Row.of(p.key(), Cell.text(p.value()), p.unit().isEmpty() ? Cell.absent() : Cell.text(p.unit())));
+      rows.add(anyUnit
+          ? Row.of(p.key(), Cell.text(p.value()), p.unit().isEmpty() ? Cell.absent() : Cell.text(p.unit()))
+          : Row.of(p.key(), Cell.text(p.value())));
     }
-    return new ResultTable(d.kind() + " " + d.name(), "property",
-        List.of(Column.unitless("value"), Column.unitless("unit")), rows);
+    List<Column> columns = anyUnit ? List.of(Column.unitless("value"), Column.unitless("unit"))
+        : List.of(Column.unitless("value"));
+    return new ResultTable(d.kind() + " " + d.name(), "property", columns, rows);
   }
 
   static ResultTable corrections(List<ArmCorrection> corrections, String unit) {

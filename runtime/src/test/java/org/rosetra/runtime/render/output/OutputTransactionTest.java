@@ -25,6 +25,9 @@ class OutputTransactionTest {
     try (Stream<Path> walk = Files.walk(dir)) {
       for (Path p : (Iterable<Path>) walk::iterator) {
         String key = dir.relativize(p).toString().replace('\\', '/');
+        if (key.equals(OutputTransaction.MANIFEST)) {
+          continue; // the list of written files; its own test below
+        }
         files.put(key, Files.isDirectory(p) ? "<dir>" : Files.readString(p, UTF_8));
       }
     }
@@ -39,6 +42,23 @@ class OutputTransactionTest {
     Files.writeString(dir.resolve("plots/mohr-gone.svg"), "old gone");
     Files.writeString(dir.resolve("tables/results.csv"), "old table");
     Files.writeString(dir.resolve("notes.txt"), "the user's own file");
+    Files.writeString(dir.resolve(OutputTransaction.MANIFEST),
+        "plots/mohr-a.svg\nplots/mohr-gone.svg\nrecord.md\ntables/results.csv\n");
+  }
+
+  @Test
+  void onlyFilesAnEarlierRunWroteAreRemoved() throws IOException {
+    previousRun();
+    Files.writeString(dir.resolve("plots/sketch-by-hand.svg"), "a reviewer's own file");
+    try (OutputTransaction tx = OutputTransaction.begin(dir)) {
+      tx.write("plots/mohr-a.svg", "new a".getBytes(UTF_8));
+      tx.commit();
+    }
+    Map<String, String> after = snapshot();
+    assertFalse(after.containsKey("plots/mohr-gone.svg"), "written by the earlier run, not by this one");
+    assertEquals("a reviewer's own file", after.get("plots/sketch-by-hand.svg"), "never written by a run");
+    assertEquals(OutputTransaction.MANIFEST + "\nplots/mohr-a.svg\n",
+        Files.readString(dir.resolve(OutputTransaction.MANIFEST), UTF_8), "the list names what this run wrote");
   }
 
   @Test
