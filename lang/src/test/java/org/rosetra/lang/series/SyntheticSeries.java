@@ -40,7 +40,7 @@ final class SyntheticSeries {
         for (int i = 0; i < n; i++) {
             t[i] = Double.parseDouble(time[i]);
             for (int a = 0; a < 3; a++) {
-                microstrain[a][i] = Double.parseDouble(arms[a][i]);
+                microstrain[a][i] = parseOrNaN(arms[a][i]);
             }
             if (temperature != null) {
                 temp[i] = Double.parseDouble(temperature[i]);
@@ -73,6 +73,15 @@ final class SyntheticSeries {
             }
         }
         return new SyntheticSeries(n, time, arms, temperature);
+    }
+
+    /** A reading the test spoiled on purpose has no value of its own. */
+    private static double parseOrNaN(String text) {
+        try {
+            return Double.parseDouble(text);
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
     }
 
     /** Sets one arm's reading at sample {@code i} (written as given). */
