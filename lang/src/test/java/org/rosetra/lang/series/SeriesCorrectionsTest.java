@@ -80,4 +80,64 @@ class SeriesCorrectionsTest {
         double peak = SeriesResultsTest.max(expected.get("von_mises"));
         assertEquals(peak, run.value("peak"), 1e-9 * peak);
     }
+
+    /**
+     * Step 4 with arm a at {@code angle} from the part's x-axis: arm i at angle + {0, 45, 90} deg
+     * reads e(t) = eps_x cos^2 t + eps_y sin^2 t + gamma_xy sin t cos t (LANGUAGE.md); the three
+     * equations are solved here by Cramer's rule, and returned as the arm strains a rosette at 0 deg
+     * would read (eps_x, (gamma_xy + eps_x + eps_y) / 2, eps_y) for {@link ClosedForm}.
+     */
+    static double[] inPartAxes(double[] reads, double angleDeg) {
+        double[][] m = new double[3][];
+        for (int i = 0; i < 3; i++) {
+            double t = Math.toRadians(angleDeg + 45 * i);
+            m[i] = new double[] {Math.cos(t) * Math.cos(t), Math.sin(t) * Math.sin(t), Math.sin(t) * Math.cos(t)};
+        }
+        double det = det(m[0], m[1], m[2]);
+        double[] x = new double[3];
+        for (int k = 0; k < 3; k++) {
+            double[][] c = {m[0].clone(), m[1].clone(), m[2].clone()};
+            for (int i = 0; i < 3; i++) {
+                c[i][k] = reads[i];
+            }
+            x[k] = det(c[0], c[1], c[2]) / det;
+        }
+        return new double[] {x[0], (x[2] + x[0] + x[1]) / 2, x[1]};
+    }
+
+    private static double det(double[] a, double[] b, double[] c) {
+        return a[0] * (b[1] * c[2] - b[2] * c[1]) - a[1] * (b[0] * c[2] - b[2] * c[0]) + a[2] * (b[0] * c[1] - b[1] * c[0]);
+    }
+
+    @Test
+    void aRosetteTurnedOnThePartGivesEveryResultInThePartsAxes(@TempDir Path dir) throws Exception {
+        SyntheticSeries data = SyntheticSeries.swaying(400, 102, Double.NaN, 0);
+        data.write(dir.resolve("data.csv"));
+        SeriesRun run = SeriesRun.of(dir, """
+                material steel {
+                  E     = 200 GPa
+                  nu    = 0.3
+                  yield = 250 MPa
+                }
+                gauge g {
+                  factor = 2.0
+                }
+                rosette r {
+                  layout   = rectangular
+                  gauge    = g
+                  material = steel
+                  angle    = 30 deg
+                }
+                series run from "data.csv" {
+                  time = "t_s" s
+                  r    = "g1", "g2", "g3" ue
+                }
+                """);
+        assertEquals(0, run.status(), run.describe());
+        Map<String, double[]> expected = data.members(i -> inPartAxes(data.asRead(i), 30),
+                SeriesResultsTest.E, SeriesResultsTest.NU);
+        for (String member : ClosedForm.MEMBERS) {
+            data.assertExtremes(run, "run", "r", member, expected.get(member));
+        }
+    }
 }

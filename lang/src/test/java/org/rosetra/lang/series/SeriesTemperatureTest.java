@@ -135,4 +135,32 @@ class SeriesTemperatureTest {
             data.assertExtremes(run, "run", "r", member, expected.get(member));
         }
     }
+
+    @Test
+    void aZeroBaselineIsCorrectedAtItsOwnTemperatureBeforeItIsSubtracted(@TempDir Path dir) throws Exception {
+        SyntheticSeries data = SyntheticSeries.swaying(300, 34, 18, 27);
+        data.write(dir.resolve("data.csv"));
+        SeriesRun run = SeriesRun.of(dir, DECLARATIONS + """
+                baseline cold {
+                  temperature = 12 degC
+                  r = 10, -5, 20 ue
+                }
+                series run from "data.csv" {
+                  time        = "t_s" s
+                  r           = "g1", "g2", "g3" ue
+                  temperature = "temp_c" degC
+                  zero        = cold
+                }
+                """);
+        assertEquals(0, run.status(), run.describe());
+        // LANGUAGE.md, step 3: subtract the baseline's reading of the same arm, corrected by steps 1-2.
+        double[] zero = {corrected(10, 12), corrected(-5, 12), corrected(20, 12)};
+        Map<String, double[]> expected = data.members(i -> new double[] {
+            corrected(data.microstrain[0][i], data.temp[i]) - zero[0],
+            corrected(data.microstrain[1][i], data.temp[i]) - zero[1],
+            corrected(data.microstrain[2][i], data.temp[i]) - zero[2]}, E, NU);
+        for (String member : ClosedForm.MEMBERS) {
+            data.assertExtremes(run, "run", "r", member, expected.get(member));
+        }
+    }
 }
