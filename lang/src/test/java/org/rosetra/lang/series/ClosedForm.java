@@ -32,6 +32,14 @@ final class ClosedForm {
 
     /** All members for arm strains (plain fractions) of a rectangular rosette in plane stress. */
     static Map<String, Double> rectangularPlaneStress(double ea, double eb, double ec, double e, double nu) {
+        return rectangular(ea, eb, ec, e, nu, false);
+    }
+
+    /**
+     * As above; in plane strain (textbook Hooke's law with eps_z = 0): sigma_x = E / ((1 + nu)
+     * (1 - 2 nu)) ((1 - nu) eps_x + nu eps_y), sigma_z = nu (sigma_x + sigma_y), eps_z = 0.
+     */
+    static Map<String, Double> rectangular(double ea, double eb, double ec, double e, double nu, boolean planeStrain) {
         double ex = ea;
         double ey = ec;
         double gxy = 2 * eb - ea - ec;
@@ -40,16 +48,24 @@ final class ClosedForm {
         double e1 = centre + radius;
         double e2 = centre - radius;
         double theta = radius == 0 ? 0 : Math.toDegrees(0.5 * Math.atan2(gxy, ex - ey));
-        double k = e / (1 - nu * nu);
         double g = e / (2 * (1 + nu));
-        double sx = k * (ex + nu * ey);
-        double sy = k * (ey + nu * ex);
+        double sx;
+        double sy;
+        if (planeStrain) {
+            double l = e / ((1 + nu) * (1 - 2 * nu));
+            sx = l * ((1 - nu) * ex + nu * ey);
+            sy = l * ((1 - nu) * ey + nu * ex);
+        } else {
+            double k = e / (1 - nu * nu);
+            sx = k * (ex + nu * ey);
+            sy = k * (ey + nu * ex);
+        }
         double txy = g * gxy;
         double sc = (sx + sy) / 2;
         double sr = Math.sqrt(Math.pow((sx - sy) / 2, 2) + txy * txy);
         double s1 = sc + sr;
         double s2 = sc - sr;
-        double s3 = 0;
+        double s3 = planeStrain ? nu * (sx + sy) : 0;
         double hi = Math.max(s1, Math.max(s2, s3));
         double lo = Math.min(s1, Math.min(s2, s3));
         Map<String, Double> m = new LinkedHashMap<>();
@@ -60,7 +76,7 @@ final class ClosedForm {
         m.put("eps_2", e2);
         m.put("theta_p", theta);
         m.put("gamma_max", e1 - e2);
-        m.put("eps_z", -nu / (1 - nu) * (ex + ey));
+        m.put("eps_z", planeStrain ? 0 : -nu / (1 - nu) * (ex + ey));
         m.put("sigma_x", sx);
         m.put("sigma_y", sy);
         m.put("tau_xy", txy);

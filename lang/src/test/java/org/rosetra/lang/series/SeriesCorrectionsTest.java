@@ -140,4 +140,40 @@ class SeriesCorrectionsTest {
             data.assertExtremes(run, "run", "r", member, expected.get(member));
         }
     }
+
+    @Test
+    void planeStrainGivesSigmaZAndAThreeDimensionalVonMisesAtEverySample(@TempDir Path dir) throws Exception {
+        SyntheticSeries data = SyntheticSeries.swaying(400, 103, Double.NaN, 0);
+        data.write(dir.resolve("data.csv"));
+        SeriesRun run = SeriesRun.of(dir, """
+                material steel {
+                  E     = 200 GPa
+                  nu    = 0.3
+                  yield = 250 MPa
+                }
+                gauge g {
+                  factor = 2.0
+                }
+                rosette r {
+                  layout   = rectangular
+                  gauge    = g
+                  material = steel
+                  state    = plane_strain
+                }
+                series run from "data.csv" {
+                  time = "t_s" s
+                  r    = "g1", "g2", "g3" ue
+                }
+                check "embedded gauge margin": r.von_mises <= 200 MPa
+                """);
+        assertEquals(0, run.status(), run.describe());
+        Map<String, double[]> expected = data.members(data::asRead, SeriesResultsTest.E, SeriesResultsTest.NU, true);
+        for (String member : ClosedForm.MEMBERS) {
+            data.assertExtremes(run, "run", "r", member, expected.get(member));
+        }
+        double[] vm = expected.get("von_mises");
+        int worst = SyntheticSeries.argmax(vm);
+        assertEquals(vm[worst] / 200e6, (Double) run.check("embedded gauge margin").get("utilization"), 1e-9);
+        assertEquals(data.t[worst], (Double) run.check("embedded gauge margin").get("at"), 0.0);
+    }
 }

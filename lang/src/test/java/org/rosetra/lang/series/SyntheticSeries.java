@@ -137,13 +137,17 @@ final class SyntheticSeries {
      * whatever correction the test applies), through {@link ClosedForm}.
      */
     Map<String, double[]> members(IntFunction<double[]> strains, double e, double nu) {
+        return members(strains, e, nu, false);
+    }
+
+    Map<String, double[]> members(IntFunction<double[]> strains, double e, double nu, boolean planeStrain) {
         Map<String, double[]> out = new HashMap<>();
         for (String m : ClosedForm.MEMBERS) {
             out.put(m, new double[n]);
         }
         for (int i = 0; i < n; i++) {
             double[] s = strains.apply(i);
-            Map<String, Double> one = ClosedForm.rectangularPlaneStress(s[0], s[1], s[2], e, nu);
+            Map<String, Double> one = ClosedForm.rectangular(s[0], s[1], s[2], e, nu, planeStrain);
             final int row = i;
             one.forEach((m, v) -> out.get(m)[row] = v);
         }
