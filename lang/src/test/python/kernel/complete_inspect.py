@@ -33,5 +33,13 @@ def check(client):
     assert content["found"] is False
     assert content["data"] == {}
 
+    # A cursor outside the code (a front end's mistake) is taken as the nearest end.
+    for cursor, expected in ((2 ** 40, 3), (-5, 0)):
+        message = client.session.msg("complete_request", {"code": "ros", "cursor_pos": cursor})
+        client.shell_channel.send(message)
+        content = shell_reply(client, message["header"]["msg_id"])["content"]
+        assert content["status"] == "ok" and content["cursor_end"] == expected, content
+    assert shell_reply(client, client.kernel_info())["content"]["status"] == "ok"
+
 
 main(check)

@@ -1,7 +1,21 @@
 """interrupt_request during a long cell; control and heartbeat stay responsive meanwhile."""
 import time
 
+import zmq
+
 from kernel_driver import control_reply, main, of_type, run_cell, send_control, shell_reply, iopub_until_idle
+
+
+def heartbeat_answers(client):
+    context = zmq.Context()
+    socket = context.socket(zmq.REQ)
+    socket.linger = 0
+    socket.connect("tcp://%s:%d" % (client.ip, client.hb_port))
+    socket.send(b"ping")
+    answered = socket.poll(5000) and socket.recv() == b"ping"
+    socket.close()
+    context.term()
+    return answered
 
 
 def check(client):
@@ -17,11 +31,9 @@ def check(client):
     started = time.monotonic()
     info = control_reply(client, send_control(client, "kernel_info_request", {}), timeout=5)
     assert info["content"]["implementation"] == "rosetra"
-    assert time.monotonic() - started < 2, "control waited for the cell"
+    assert time.monotonic() - started < 5, "control waited for the cell (which runs 60 s)"
     # Messaging protocol 5.3, "Heartbeat for kernels": echoes while busy.
-    assert client.hb_channel.is_alive()
-    time.sleep(1.5)
-    assert client.hb_channel.is_beating(), "heartbeat stopped during a long cell"
+    assert heartbeat_answers(client), "no heartbeat during a long cell"
 
     # Messaging protocol 5.3, "Kernel interrupt": interrupt_request on control, reply {}.
     interrupted_at = time.monotonic()

@@ -3,6 +3,7 @@ package org.rosetra.lang.cli;
 import java.nio.file.Path;
 import org.rosetra.lang.kernel.KernelCommand;
 import org.rosetra.lang.kernel.SessionCellEngine;
+import org.rosetra.lang.repl.ReplCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -12,7 +13,8 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Reduces strain-gauge rosette measurements written as a checked script.",
-        subcommands = {RunCommand.class, CheckCommand.class, VerifyCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, CheckCommand.class, VerifyCommand.class, ReplCommand.class,
+                CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -29,7 +31,7 @@ public final class Main implements Runnable {
         // "env": {"ROSETRA_ALLOW_JAVA": "1"} in its kernel.json).
         boolean kernelAllowsJava = "1".equals(System.getenv("ROSETRA_ALLOW_JAVA"));
         line.addSubcommand("kernel", new KernelCommand(() ->
-                new SessionCellEngine(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version())));
+                SessionCellEngine.warmedUp(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version(), 1500)));
         line.setExecutionExceptionHandler(new UserErrorHandler());
         return line.execute(args);
     }

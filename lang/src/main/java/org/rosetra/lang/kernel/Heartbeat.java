@@ -1,5 +1,6 @@
 package org.rosetra.lang.kernel;
 
+import java.util.List;
 import org.zeromq.ZMQ;
 import org.zeromq.ZMQException;
 
@@ -36,9 +37,9 @@ final class Heartbeat {
     private void echo() {
         try {
             while (!stopped) {
-                byte[] beat = socket.recv(0);
+                List<byte[]> beat = Frames.receive(socket, 0);
                 if (beat != null) {
-                    socket.send(beat, 0);
+                    Frames.send(socket, beat);
                 }
             }
         } catch (ZMQException e) {

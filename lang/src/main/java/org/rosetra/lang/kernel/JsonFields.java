@@ -65,7 +65,11 @@ final class JsonFields {
         return values.get(name) instanceof Boolean b ? b : fallback;
     }
 
+    /** A whole number, clamped into the int range (a cursor far past the end is just the end). */
     int whole(String name, int fallback) {
-        return values.get(name) instanceof Long n ? Math.toIntExact(n) : fallback;
+        if (values.get(name) instanceof Long n) {
+            return (int) Math.max(Integer.MIN_VALUE, Math.min(Integer.MAX_VALUE, n));
+        }
+        return fallback;
     }
 }

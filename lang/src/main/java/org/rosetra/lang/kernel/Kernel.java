@@ -159,6 +159,17 @@ public final class Kernel {
     /** Handles one control request; false when the kernel should stop. */
     private boolean onControl(List<byte[]> frames, MessageOut out, ShellRequests shellRequests,
             String languageVersion, String implementationVersion) {
+        try {
+            return answerControl(frames, out, shellRequests, languageVersion, implementationVersion);
+        } catch (RuntimeException e) {
+            log.println("rosetra kernel: failed to answer a control request");
+            e.printStackTrace(log);
+            return true;
+        }
+    }
+
+    private boolean answerControl(List<byte[]> frames, MessageOut out, ShellRequests shellRequests,
+            String languageVersion, String implementationVersion) {
         Request request = decodeOrLog(wire, frames, "control", log);
         if (request == null) {
             return true;

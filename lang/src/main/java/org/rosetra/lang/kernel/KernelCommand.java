@@ -10,10 +10,12 @@ import picocli.CommandLine.Option;
 
 /** {@code rosetra kernel}: serves notebook front ends; {@code rosetra kernel install} registers it. */
 @Command(name = "kernel",
-        mixinStandardHelpOptions = true,
         description = "Run Rosetra as a notebook kernel (Jupyter messaging protocol).",
         subcommands = KernelInstallCommand.class)
 public final class KernelCommand implements Callable<Integer> {
+
+    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+    private boolean help;
 
     @Option(names = "--connection-file", paramLabel = "FILE",
             description = "The connection file written by the notebook front end.")

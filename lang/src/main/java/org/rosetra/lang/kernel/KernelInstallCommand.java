@@ -9,9 +9,11 @@ import picocli.CommandLine.Option;
 
 /** {@code rosetra kernel install}: writes the {@code rosetra} kernelspec where front ends look. */
 @Command(name = "install",
-        mixinStandardHelpOptions = true,
         description = "Register Rosetra with notebook front ends (writes the kernelspec).")
 public final class KernelInstallCommand implements Callable<Integer> {
+
+    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+    private boolean help;
 
     @ArgGroup(exclusive = true)
     private Destination destination = new Destination();

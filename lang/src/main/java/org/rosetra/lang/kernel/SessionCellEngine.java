@@ -14,6 +14,7 @@ import org.rosetra.lang.plan.CheckResult;
 import org.rosetra.lang.plan.Outcome;
 import org.rosetra.lang.plan.Output;
 import org.rosetra.lang.plan.Session;
+import org.rosetra.lang.repl.ScriptCompleter;
 import org.rosetra.lang.syntax.ScriptParser;
 import org.rosetra.lang.syntax.Statement;
 import org.rosetra.runtime.render.table.HtmlTable;
@@ -29,6 +30,7 @@ public final class SessionCellEngine implements CellEngine {
     private final Session session;
     private final AtomicBoolean cancel = new AtomicBoolean();
     private final String version;
+    private final ScriptCompleter completer;
     private int cells;
 
     public SessionCellEngine(Path folder, boolean allowJava, String version) {
@@ -36,6 +38,36 @@ public final class SessionCellEngine implements CellEngine {
         this.session.allowJava(allowJava);
         this.session.readOptions(ReadOptions.defaults().withCancel(cancel));
         this.version = version;
+        this.completer = new ScriptCompleter(session);
+    }
+
+    /**
+     * An engine whose language code is already compiled by the JVM: a throwaway session runs
+     * small cells first (for at most {@code budgetMillis}), so a notebook's first cells are as
+     * quick as its later ones.
+     */
+    public static SessionCellEngine warmedUp(Path folder, boolean allowJava, String version, long budgetMillis) {
+        SessionCellEngine scratch = new SessionCellEngine(folder, false, version);
+        OutputSink nowhere = new OutputSink() {
+            @Override
+            public void display(MimeBundle bundle) {
+            }
+
+            @Override
+            public void printOut(String text) {
+            }
+
+            @Override
+            public void printErr(String text) {
+            }
+        };
+        long deadline = System.nanoTime() + budgetMillis * 1_000_000L;
+        for (int i = 0; i < 2000 && System.nanoTime() < deadline; i++) {
+            scratch.execute("let x = " + i + " MPa\nlet y = 2 * x", nowhere);
+            scratch.complete("let z = x", 9);
+            scratch.isComplete("material m {");
+        }
+        return new SessionCellEngine(folder, allowJava, version);
     }
 
     @Override
@@ -115,12 +147,13 @@ public final class SessionCellEngine implements CellEngine {
 
     @Override
     public CompletionResult complete(String code, int cursorPos) {
-        return CellCompletion.complete(session, code, cursorPos);
+        var c = completer.complete(code, cursorPos);
+        return new CompletionResult(c.candidates(), c.start(), c.end());
     }
 
     @Override
     public InspectionResult inspect(String code, int cursorPos, int detailLevel) {
-        String word = CellCompletion.wordAt(code, cursorPos);
+        String word = wordAt(code, cursorPos);
         if (word.isEmpty()) {
             return InspectionResult.notFound();
         }
@@ -136,11 +169,44 @@ public final class SessionCellEngine implements CellEngine {
             String text = f.signature() + ": " + f.doc();
             return InspectionResult.of(MimeBundle.plain(text).with("text/markdown", "`" + f.signature() + "` \u2014 " + f.doc()));
         }
-        String definition = CellCompletion.definitionOf(session, word);
+        String definition = definitionOf(word);
         if (definition != null) {
             return InspectionResult.of(MimeBundle.plain(definition).with("text/markdown", "```\n" + definition + "\n```"));
         }
         return InspectionResult.notFound();
+    }
+
+    /** The name around {@code cursor}, or "". */
+    static String wordAt(String code, int cursor) {
+        int at = Math.min(Math.max(cursor, 0), code.length());
+        int start = at;
+        while (start > 0 && isNameChar(code.charAt(start - 1))) {
+            start--;
+        }
+        int end = at;
+        while (end < code.length() && isNameChar(code.charAt(end))) {
+            end++;
+        }
+        return code.substring(start, end);
+    }
+
+    private static boolean isNameChar(char c) {
+        return Character.isLetterOrDigit(c) || c == '_';
+    }
+
+    /** The text of the statement defining {@code name}, as it was written, or null. */
+    private String definitionOf(String name) {
+        Statement s = session.definitionOf(name);
+        String source = s == null ? null : session.sourceOf(s.span().file());
+        if (source == null) {
+            return null;
+        }
+        String[] lines = source.split("\n", -1);
+        StringBuilder out = new StringBuilder();
+        for (int line = s.span().line(); line <= s.span().endLine() && line <= lines.length; line++) {
+            out.append(lines[line - 1]).append('\n');
+        }
+        return out.toString().stripTrailing();
     }
 
     @Override

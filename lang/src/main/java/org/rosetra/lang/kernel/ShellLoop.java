@@ -50,6 +50,17 @@ final class ShellLoop implements Runnable {
 
     /** Answers one request; false after a shutdown request. */
     private boolean serve(List<byte[]> frames) {
+        try {
+            return answer(frames);
+        } catch (RuntimeException e) {
+            // A request the kernel cannot handle must not end the shell thread.
+            log.println("rosetra kernel: failed to answer a shell request");
+            e.printStackTrace(log);
+            return true;
+        }
+    }
+
+    private boolean answer(List<byte[]> frames) {
         Request request = Kernel.decodeOrLog(wire, frames, "shell", log);
         if (request == null) {
             return true;

@@ -13,9 +13,7 @@ final class ShellRequests {
     private final String implementationVersion;
     private final String languageVersion;
     private final PrintStream log;
-
-    private volatile boolean cellRunning;
-    private int executionCount;
+    private final CellRunner cells;
 
     ShellRequests(CellEngine engine, String implementationVersion, String languageVersion,
             PrintStream log) {
@@ -23,10 +21,18 @@ final class ShellRequests {
         this.implementationVersion = implementationVersion;
         this.languageVersion = languageVersion;
         this.log = log;
+        this.cells = new CellRunner(engine, log);
     }
 
     boolean isCellRunning() {
-        return cellRunning;
+        return cells.isRunning();
+    }
+
+    /** Declines a cell queued behind a failed one. */
+    void abort(Request request, MessageOut out) {
+        out.status(request, "busy");
+        cells.abort(request, out);
+        out.status(request, "idle");
     }
 
     /** Answers {@code request}; true when it was a cell that failed and asks to stop on error. */
@@ -35,7 +41,7 @@ final class ShellRequests {
         out.status(request, "busy");
         try {
             switch (request.type()) {
-                case "execute_request" -> failedCell = execute(request, out);
+                case "execute_request" -> failedCell = cells.execute(request, out);
                 case "kernel_info_request" -> out.reply(request, "kernel_info_reply",
                         KernelInfo.content(implementationVersion, languageVersion));
                 case "complete_request" -> complete(request, out);
@@ -62,86 +68,6 @@ final class ShellRequests {
             out.status(request, "idle");
         }
         return failedCell;
-    }
-
-    /** Declines a cell queued behind a failed one. */
-    void abort(Request request, MessageOut out) {
-        out.status(request, "busy");
-        int count = executionCount;
-        out.reply(request, "execute_reply", json -> {
-            json.writeStringField("status", "aborted");
-            json.writeNumberField("execution_count", count);
-        });
-        out.status(request, "idle");
-    }
-
-    private boolean execute(Request request, MessageOut out) {
-        JsonFields content = request.content();
-        String code = content.text("code", "");
-        boolean silent = content.flag("silent", false);
-        boolean storeHistory = !silent && content.flag("store_history", true);
-        if (storeHistory) {
-            executionCount++;
-        }
-        int count = executionCount;
-        if (!silent) {
-            out.publish(request, "execute_input", json -> {
-                json.writeStringField("code", code);
-                json.writeNumberField("execution_count", count);
-            });
-        }
-        CellOutcome outcome = run(code, new CellOutputSink(out, request, silent));
-        if (outcome instanceof CellOutcome.Success success) {
-            if (!silent && success.value().isPresent()) {
-                MimeBundle value = success.value().get();
-                out.publish(request, "execute_result", json -> {
-                    json.writeNumberField("execution_count", count);
-                    JsonContent.writeBundle(json, "data", value);
-                    JsonContent.writeEmptyObject(json, "metadata");
-                });
-            }
-            out.reply(request, "execute_reply", json -> {
-                json.writeStringField("status", "ok");
-                json.writeNumberField("execution_count", count);
-                JsonContent.writeEmptyObject(json, "user_expressions");
-                json.writeArrayFieldStart("payload");
-                json.writeEndArray();
-            });
-            return false;
-        } else if (outcome instanceof CellOutcome.Failure failure) {
-            if (!silent) {
-                out.publish(request, "error", json -> writeFailure(json, failure));
-            }
-            out.reply(request, "execute_reply", json -> {
-                json.writeStringField("status", "error");
-                json.writeNumberField("execution_count", count);
-                writeFailure(json, failure);
-            });
-            return content.flag("stop_on_error", true);
-        }
-        throw new IllegalStateException("unknown outcome " + outcome);
-    }
-
-    private CellOutcome run(String code, OutputSink sink) {
-        cellRunning = true;
-        try {
-            return engine.execute(code, sink);
-        } catch (RuntimeException | StackOverflowError e) {
-            // An engine fault must not take the notebook down; the user sees it as a failed cell.
-            log.println("rosetra kernel: the engine failed on a cell");
-            e.printStackTrace(log);
-            return CellOutcome.failed("InternalError", String.valueOf(e),
-                    List.of("Internal error: " + e, "The kernel is still running; please report this cell."));
-        } finally {
-            cellRunning = false;
-        }
-    }
-
-    private static void writeFailure(com.fasterxml.jackson.core.JsonGenerator json,
-            CellOutcome.Failure failure) throws java.io.IOException {
-        json.writeStringField("ename", failure.name());
-        json.writeStringField("evalue", failure.message());
-        JsonContent.writeStrings(json, "traceback", failure.traceback());
     }
 
     private void complete(Request request, MessageOut out) {

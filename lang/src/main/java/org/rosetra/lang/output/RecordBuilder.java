@@ -93,9 +93,9 @@ public final class RecordBuilder {
             var r = e.getValue();
             String digest;
             try {
-                digest = Sha256.ofFile(r.spec().file());
-            } catch (IOException x) {
-                throw new java.io.UncheckedIOException(x);
+                digest = r.sha256().join();
+            } catch (java.util.concurrent.CompletionException x) {
+                throw x.getCause() instanceof RuntimeException re ? re : x;
             }
             series.add(new SeriesInput(e.getKey(), r.spec().shownName(), digest, r.samples(), r.firstTime(),
                     r.lastTime(), "s", r.spec().zeroText()));

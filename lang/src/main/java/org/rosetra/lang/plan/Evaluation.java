@@ -57,6 +57,7 @@ public final class Evaluation {
     /** Per rosette, its strain state at each position of the case axis (null: no result). */
     private Map<String, StrainState[]> strains;
     private final List<ArmReading> armReadings = new ArrayList<>();
+    private boolean javaAllowed;
 
     public Evaluation(Program program) {
         this.program = program;
@@ -77,6 +78,15 @@ public final class Evaluation {
 
     public Expressions expressions() {
         return expressions;
+    }
+
+    /** Whether functions written in Java may run (the user allowed it). */
+    public boolean javaAllowed() {
+        return javaAllowed;
+    }
+
+    void allowJava(boolean allow) {
+        this.javaAllowed = allow;
     }
 
     // ---- declarations -------------------------------------------------------------------

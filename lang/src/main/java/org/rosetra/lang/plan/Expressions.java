@@ -9,7 +9,9 @@ import java.util.Optional;
 import org.rosetra.lang.syntax.Binary;
 import org.rosetra.lang.syntax.Call;
 import org.rosetra.lang.syntax.Expr;
+import org.rosetra.lang.java.JavaFunctionCall;
 import org.rosetra.lang.syntax.Index;
+import org.rosetra.lang.syntax.JavaCode;
 import org.rosetra.lang.syntax.Let;
 import org.rosetra.lang.syntax.Member;
 import org.rosetra.lang.syntax.NameRef;
@@ -328,6 +330,9 @@ public final class Expressions {
         Map<String, Value> bound = new HashMap<>();
         for (int i = 0; i < args.size(); i++) {
             bound.put(function.parameters().get(i), args.get(i));
+        }
+        if (def.body() instanceof JavaCode) {
+            return JavaFunctionCall.call(def, args, c.span(), evaluation.axis, evaluation.javaAllowed());
         }
         return evaluate(def.body(), new Scope(bound, scope.frame()));
     }

@@ -153,7 +153,8 @@ public final class ScriptRunner {
         return script.resolveSibling(stem + ".out");
     }
 
-    static String verdict(CheckResult c) {
+    /** One line per check: pass or FAIL, the highest utilization and the governing case. */
+    public static String verdict(CheckResult c) {
         StringBuilder s = new StringBuilder();
         s.append(c.passes() ? "pass" : "FAIL").append("  check \"").append(c.check().label().value()).append('"');
         if (c.unbounded()) {

@@ -38,6 +38,13 @@ public final class SeriesEvaluation {
     /** A reading beyond this many microstrain is flagged as a likely debonded or saturated gauge. */
     static final double PLAUSIBLE_STRAIN = SeriesLimits.PLAUSIBLE_STRAIN;
 
+    /** Digests series files while they are read; daemon threads, so a finished run never waits for one. */
+    private static final java.util.concurrent.Executor DIGESTS = task -> {
+        Thread t = new Thread(task, "rosetra-digest");
+        t.setDaemon(true);
+        t.start();
+    };
+
     private final SeriesSpec spec;
     private final Evaluation evaluation;
     private final List<String> rosettes;
@@ -56,8 +63,10 @@ public final class SeriesEvaluation {
         this.plots = plots;
         for (String r : rosettes) {
             RosetteModel m = evaluation.rosette(r);
-            ArmCorrectionArray arms = new ArmCorrectionArray(m);
-            chains.put(r, new ReductionChain(arms.arms(), m.solver(), m.material(), m.condition()));
+            // One gauge for every arm of a rosette: the same correction serves each.
+            var arms = new org.rosetra.runtime.gauge.ArmCorrection[m.armCount()];
+            java.util.Arrays.fill(arms, m.correction());
+            chains.put(r, new ReductionChain(arms, m.solver(), m.material(), m.condition()));
             Set<RosetteMember> set = EnumSet.noneOf(RosetteMember.class);
             for (RosetteMember member : RosetteMember.values()) {
                 if (m.material() != null || !member.needsMaterial()) {
@@ -68,25 +77,25 @@ public final class SeriesEvaluation {
         }
     }
 
-    /** Per-arm corrections of a rosette (one gauge for every arm). */
-    private record ArmCorrectionArray(RosetteModel model) {
-        org.rosetra.runtime.gauge.ArmCorrection[] arms() {
-            var out = new org.rosetra.runtime.gauge.ArmCorrection[model.armCount()];
-            java.util.Arrays.fill(out, model.correction());
-            return out;
-        }
-    }
-
     /** What one pass over the series found. */
     public record Result(SeriesSpec spec, long samples, double firstTime, double lastTime,
                   Map<String, Map<RosetteMember, Extremes>> extremes, Map<String, PlausibilityFlag[]> flags,
                   Map<Check, ProbeResult> checks, Map<Call, Value.Number> reductions,
-                  Map<Plot, Decimation> plots, Map<String, double[]> zero) {}
+                  Map<Plot, Decimation> plots, Map<String, double[]> zero,
+                  java.util.concurrent.CompletableFuture<String> sha256) {}
 
     /** A check over the samples: highest utilization, the time of it, whether every sample passed. */
     public record ProbeResult(boolean defined, boolean pass, double highest, double time, boolean unbounded) {}
 
     Result run(ReadOptions options) {
+        // The record names the file's SHA-256: digest it alongside the reading, on its own thread.
+        var sha256 = java.util.concurrent.CompletableFuture.supplyAsync(() -> {
+            try {
+                return org.rosetra.runtime.render.output.Sha256.ofFile(spec.file());
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }, DIGESTS);
         Map<String, double[]> zero = zeroReadings(options);
         Map<String, ReductionChain> zeroed = new LinkedHashMap<>();
         chains.forEach((r, c) -> zeroed.put(r, zero.containsKey(r) ? c.withZero(zero.get(r)) : c));
@@ -124,7 +133,8 @@ public final class SeriesEvaluation {
         for (int k = 0; k < rosettes.size(); k++) {
             flags.put(rosettes.get(k), p.flags.get(k));
         }
-        return new Result(spec, p.samples, p.firstTime, p.lastTime, extremes, flags, checkResults, reduced, decimated, zero);
+        return new Result(spec, p.samples, p.firstTime, p.lastTime, extremes, flags, checkResults, reduced, decimated, zero,
+                sha256);
     }
 
     /** The corrected zero reading of every arm: a baseline's, or the mean over the zero window. */
@@ -453,14 +463,10 @@ public final class SeriesEvaluation {
         return v;
     }
 
-    /** Which calls, checks and plots of the program look at a series' samples. */
+    /** The {@code max(...)} and {@code min(...)} calls of the program that reduce this series' samples. */
     static List<Call> reductionsOf(Evaluation evaluation, String series) {
         List<Call> found = new ArrayList<>();
         SeriesReferences.collect(evaluation.program(), series, found);
         return found;
-    }
-
-    static boolean mentions(Expr e, String series) {
-        return SeriesReferences.mentions(e, series);
     }
 }

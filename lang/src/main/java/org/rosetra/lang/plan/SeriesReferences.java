@@ -66,10 +66,6 @@ final class SeriesReferences {
         return mentions(e, program, series, new HashSet<>());
     }
 
-    static boolean mentions(Expr e, String series) {
-        return mentions(e, null, series, new HashSet<>());
-    }
-
     private static boolean mentions(Expr e, Program program, String series, Set<String> lets) {
         if (e instanceof Index ix) {
             return ix.caseName().text().equals(series) || mentions(ix.target(), program, series, lets);

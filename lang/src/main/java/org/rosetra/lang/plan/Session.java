@@ -103,7 +103,9 @@ public final class Session {
         for (Statement s : script.statements()) {
             String key = key(s);
             if (key != null) {
-                entries.removeIf(e -> key.equals(key(e.statement())));
+                // A name defined again in a later submission replaces the older definition; a
+                // name defined twice in one submission stays twice, for the checker to report.
+                entries.removeIf(e -> !e.source().equals(source) && key.equals(key(e.statement())));
             }
             entries.add(new Entry(source, s));
         }
@@ -190,6 +192,7 @@ public final class Session {
         }
         Program program = Program.of(all);
         Evaluation evaluation = new Evaluation(program);
+        evaluation.allowJava(allowJava);
         evaluation.configureSeries(folder, readOptions, progressOut);
         try {
             List<CheckResult> checks = new ArrayList<>();

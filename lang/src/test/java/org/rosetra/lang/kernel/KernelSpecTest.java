@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -40,6 +41,14 @@ class KernelSpecTest {
                 KernelsFolder.forUser(Map.of("JUPYTER_DATA_DIR", "/data/jupyter"), home));
         assertEquals(Path.of("/opt/env/share/jupyter/kernels"),
                 KernelsFolder.underPrefix(Path.of("/opt/env")));
+    }
+
+    @Test
+    void asksPythonForItsPrefix() throws IOException {
+        // Python documentation, sys.prefix; the kernels folder under it as for --prefix.
+        Assumptions.assumeTrue(Files.isExecutable(Path.of("/usr/bin/python3")), "needs /usr/bin/python3");
+        assertEquals(Path.of("/usr/share/jupyter/kernels"),
+                KernelsFolder.forPythonEnvironment("/usr/bin/python3"));
     }
 
     @Test
