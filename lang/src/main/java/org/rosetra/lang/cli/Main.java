@@ -25,6 +25,10 @@ public final class Main implements Runnable {
 
     /** Runs the command line and returns the exit status (0 ran and passed, 1 a check failed, 2 error). */
     public static int execute(String... args) {
+        var quick = QuickStart.tryRun(args);
+        if (quick.isPresent()) {
+            return quick.get();
+        }
         CommandLine line = new CommandLine(new Main());
         // The kernel serves cells from a session in the folder it was started in. Java-bodied
         // functions run in it only when the kernel's environment allows them (for instance

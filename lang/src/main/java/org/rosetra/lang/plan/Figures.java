@@ -4,7 +4,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.Executor;
 import java.util.function.Function;
+import java.util.function.Supplier;
+import org.rosetra.runtime.render.plot.Painting;
+import org.rosetra.runtime.render.plot.PngEncoder;
+import org.rosetra.runtime.render.plot.SvgEncoder;
 import org.rosetra.lang.syntax.Check;
 import org.rosetra.lang.syntax.ComparisonOp;
 import org.rosetra.lang.syntax.Plot;
@@ -101,7 +108,7 @@ final class Figures {
                     u.fromSi(p.stress().sigmaY()), u.fromSi(p.stress().tauXY()),
                     "normal stress σ [" + u.symbol() + "]", "shear stress τ [" + u.symbol() + "]"));
         }
-        return figure(plot, "Mohr's circles, " + label, "mohr-" + p.stem(label), new MohrFigure(circles));
+        return figure(plot, "Mohr's circles, " + label, "mohr-" + p.stem(label), () -> new MohrFigure(circles));
     }
 
     private static Output directions(Plot plot, Value target, Evaluation evaluation, DisplayUnits display, String label) {
@@ -128,7 +135,7 @@ final class Figures {
                 u.fromSi(p.strain().epsX()), u.fromSi(p.strain().epsY()), u.fromSi(p.strain().gammaXY()),
                 angles.stream().mapToDouble(Double::doubleValue).toArray(),
                 readings.stream().mapToDouble(Double::doubleValue).toArray(), u.symbol());
-        return figure(plot, "Strain against direction, " + label, "directions-" + p.stem(label), new DirectionFigure(curves));
+        return figure(plot, "Strain against direction, " + label, "directions-" + p.stem(label), () -> new DirectionFigure(curves));
     }
 
     private static Output value(Plot plot, Value target, Evaluation evaluation, DisplayUnits display, String label,
@@ -142,7 +149,7 @@ final class Figures {
                 shown[i] = u.fromSi(h.values()[i]);
             }
             History history = new History(label + " over " + h.series(), h.time(), shown, "s", label, u.symbol(), limit);
-            return figure(plot, label + " against time, series " + h.series(), label + "-" + h.series(), new HistoryFigure(history));
+            return figure(plot, label + " against time, series " + h.series(), label + "-" + h.series(), () -> new HistoryFigure(history));
         }
         double[] values = Arithmetic.column(target, evaluation.axis().size());
         double[] shown = new double[values.length];
@@ -150,7 +157,7 @@ final class Figures {
             shown[i] = Double.isNaN(values[i]) ? Double.NaN : u.fromSi(values[i]);
         }
         CaseBars bars = new CaseBars(label + " per case", evaluation.axis(), shown, label, u.symbol(), limit);
-        return figure(plot, label + " per case", label, new CaseBarFigure(bars));
+        return figure(plot, label + " per case", label, () -> new CaseBarFigure(bars));
     }
 
     private static Output history(Plot plot, SeriesEvaluation.Result series, Decimation d, Evaluation evaluation,
@@ -166,7 +173,7 @@ final class Figures {
         String shownLabel = label.endsWith("[" + name + "]") ? label.substring(0, label.length() - name.length() - 2) : label;
         Optional<Limit> limit = limitFor(label, evaluation, u, textOf).or(() -> limitFor(shownLabel, evaluation, u, textOf));
         History history = new History(shownLabel + ", series " + name, points[0], shown, "s", shownLabel, u.symbol(), limit);
-        return figure(plot, shownLabel + " against time, series " + name, shownLabel + "-" + name, new HistoryFigure(history));
+        return figure(plot, shownLabel + " against time, series " + name, shownLabel + "-" + name, () -> new HistoryFigure(history));
     }
 
     /** The dimension of a plotted member (the history itself is not kept). */
@@ -197,7 +204,29 @@ final class Figures {
         return Optional.empty();
     }
 
-    private static Output figure(Plot plot, String caption, String stem, Figure figure) {
-        return new Output.FigureOutput(plot, caption, figure.render(FileStem.from(stem)));
+    /**
+     * Draws a figure as SVG here and as PNG on a second thread at the same time, each from its
+     * own copy of the figure (a chart is not drawn by two threads at once). The bytes are the
+     * same as drawing one after the other.
+     */
+    private static Output figure(Plot plot, String caption, String stem, Supplier<Figure> make) {
+        CompletableFuture<byte[]> png = CompletableFuture.supplyAsync(() -> PngEncoder.encode(make.get().painting()), DRAWING);
+        Painting painting = make.get().painting();
+        byte[] svg = SvgEncoder.encode(painting);
+        byte[] pngBytes;
+        try {
+            pngBytes = png.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+        RenderedFigure rendered = new RenderedFigure(FileStem.from(stem), painting.width(), painting.height(), svg, pngBytes);
+        return new Output.FigureOutput(plot, caption, rendered);
     }
+
+    /** Draws PNGs beside the main thread; daemon threads, so they never keep the JVM alive. */
+    private static final Executor DRAWING = task -> {
+        Thread t = new Thread(task, "rosetra-png");
+        t.setDaemon(true);
+        t.start();
+    };
 }
