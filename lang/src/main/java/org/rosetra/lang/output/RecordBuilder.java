@@ -101,8 +101,20 @@ public final class RecordBuilder {
             } catch (java.util.concurrent.CompletionException x) {
                 throw x.getCause() instanceof RuntimeException re ? re : x;
             }
+            StringBuilder zero = new StringBuilder(r.spec().zeroText());
+            for (var z : r.zero().entrySet()) {
+                zero.append("; ").append(z.getKey()).append(':');
+                for (int a = 0; a < z.getValue().length; a++) {
+                    zero.append(' ').append(ARMS.charAt(a)).append(' ')
+                            .append(String.format(java.util.Locale.ROOT, "%.1f", strain.fromSi(z.getValue()[a])));
+                }
+                zero.append(' ').append(strain.symbol());
+            }
+            if (r.spec().temperatureColumn() != null) {
+                zero.append("; temperature from column \"").append(r.spec().temperatureColumn()).append('"');
+            }
             series.add(new SeriesInput(e.getKey(), r.spec().shownName(), digest, r.samples(), r.firstTime(),
-                    r.lastTime(), "s", r.spec().zeroText()));
+                    r.lastTime(), "s", zero.toString()));
             allInputs.add(new InputFile(r.spec().shownName(), digest));
             for (var f : r.flags().entrySet()) {
                 List<String> columns = r.spec().rosettes().get(f.getKey());
@@ -110,7 +122,7 @@ public final class RecordBuilder {
                     var flag = f.getValue()[a];
                     if (flag.raised()) {
                         flagged.add(new Row(e.getKey() + " / " + f.getKey() + " arm " + ARMS.charAt(a)
-                                + " (\"" + columns.get(a) + "\")", List.of(Cell.of(flag.count()),
+                                + " (\"" + columns.get(a) + "\")", List.of(Cell.text(Long.toString(flag.count())),
                                 Cell.of(strain.fromSi(flag.worst())), Cell.of(flag.timeOfWorst()),
                                 Cell.of(flag.firstTime()), Cell.of(flag.lastTime()))));
                     }

@@ -310,12 +310,12 @@ public final class Expressions {
             case "atan2": return Arithmetic.atan2(two(c, args, 0), two(c, args, 1), c.span());
             case "max": return Arithmetic.extreme(args, true, c.span(), evaluation.axis);
             case "min": return Arithmetic.extreme(args, false, c.span(), evaluation.axis);
-            case "strain_at": return directional(c, args, Direction.STRAIN);
-            case "shear_at": return directional(c, args, Direction.SHEAR);
-            case "stress_at": return directional(c, args, Direction.STRESS);
-            case "shear_stress_at": return directional(c, args, Direction.SHEAR_STRESS);
-            case "mohr_coulomb": return criterion(c, args, true);
-            case "rankine": return criterion(c, args, false);
+            case "strain_at": return directional(c, args, Direction.STRAIN, params);
+            case "shear_at": return directional(c, args, Direction.SHEAR, params);
+            case "stress_at": return directional(c, args, Direction.STRESS, params);
+            case "shear_stress_at": return directional(c, args, Direction.SHEAR_STRESS, params);
+            case "mohr_coulomb": return criterion(c, args, true, params);
+            case "rankine": return criterion(c, args, false, params);
             default:
                 throw new EvaluationException(c.function().span(), "unknown function '" + f + "'");
         }
@@ -353,7 +353,7 @@ public final class Expressions {
 
     private enum Direction { STRAIN, SHEAR, STRESS, SHEAR_STRESS }
 
-    private Value directional(Call c, List<Value> args, Direction kind) {
+    private Value directional(Call c, List<Value> args, Direction kind, Scope scope) {
         Value target = two(c, args, 0);
         Value angle = two(c, args, 1);
         if (!(angle instanceof Value.Number a) || !a.dimension().equals(Dimension.ANGLE)) {
@@ -361,6 +361,9 @@ public final class Expressions {
         }
         double theta = a.si();
         Dimension d = kind == Direction.STRESS || kind == Direction.SHEAR_STRESS ? Dimension.STRESS : Dimension.NONE;
+        if (target instanceof Value.Rosette r && scope.frame() != null) {
+            return directionalOverSamples(c, r.name(), kind, theta, d, scope.frame());
+        }
         if (target instanceof Value.State s) {
             StateModel state = evaluation.state(s.name());
             return new Value.Number(directionalValue(kind, state.strain(), state.stress(), theta, c, s.name()), d);
@@ -397,6 +400,27 @@ public final class Expressions {
         return new Value.Column(out, d);
     }
 
+    /** The same transformation over a chunk of samples, from the chunk's strain or stress columns. */
+    private Value directionalOverSamples(Call c, String rosette, Direction kind, double theta, Dimension d, Frame f) {
+        boolean stress = kind == Direction.STRESS || kind == Direction.SHEAR_STRESS;
+        if (stress && evaluation.rosette(rosette).material() == null) {
+            throw new EvaluationException(c.span(), c.function().text() + " needs rosette " + rosette + " to have a material");
+        }
+        double[] x = f.member(rosette, stress ? RosetteMember.SIGMA_X : RosetteMember.EPS_X);
+        double[] y = f.member(rosette, stress ? RosetteMember.SIGMA_Y : RosetteMember.EPS_Y);
+        double[] xy = f.member(rosette, stress ? RosetteMember.TAU_XY : RosetteMember.GAMMA_XY);
+        double[] out = new double[f.n()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = switch (kind) {
+                case STRAIN -> new StrainState(x[i], y[i], xy[i]).normalAt(theta);
+                case SHEAR -> new StrainState(x[i], y[i], xy[i]).shearAt(theta);
+                case STRESS -> new StressState(x[i], y[i], xy[i]).normalAt(theta);
+                case SHEAR_STRESS -> new StressState(x[i], y[i], xy[i]).shearAt(theta);
+            };
+        }
+        return new Value.History(f.series(), out, f.times(), d);
+    }
+
     private static double directionalValue(Direction kind, StrainState strain, StressState stress, double theta,
                                            Call c, String name) {
         switch (kind) {
@@ -419,7 +443,7 @@ public final class Expressions {
         };
     }
 
-    private Value criterion(Call c, List<Value> args, boolean mohrCoulomb) {
+    private Value criterion(Call c, List<Value> args, boolean mohrCoulomb, Scope scope) {
         Value target = one(c, args);
         String what = mohrCoulomb ? "mohr_coulomb" : "rankine";
         Material material;
@@ -427,7 +451,17 @@ public final class Expressions {
         double[] s2;
         double[] s3;
         Integer only = null;
-        if (target instanceof Value.State s) {
+        Frame frame = target instanceof Value.Rosette ? scope.frame() : null;
+        if (frame != null) {
+            Value.Rosette r = (Value.Rosette) target;
+            material = evaluation.rosette(r.name()).material();
+            if (material == null) {
+                throw new EvaluationException(c.span(), what + " needs rosette " + r.name() + " to have a material");
+            }
+            s1 = frame.member(r.name(), RosetteMember.SIGMA_1);
+            s2 = frame.member(r.name(), RosetteMember.SIGMA_2);
+            s3 = frame.member(r.name(), RosetteMember.SIGMA_Z);
+        } else if (target instanceof Value.State s) {
             StateModel state = evaluation.state(s.name());
             RosetteResult r = stateResult(state);
             if (state.material() == null || !r.has(RosetteMember.SIGMA_Z)) {
@@ -469,6 +503,9 @@ public final class Expressions {
             }
         } catch (IllegalArgumentException e) {
             throw new EvaluationException(c.span(), e.getMessage());
+        }
+        if (frame != null) {
+            return new Value.History(frame.series(), out, frame.times(), Dimension.NONE);
         }
         if (target instanceof Value.State) {
             return new Value.Number(out[0], Dimension.NONE);

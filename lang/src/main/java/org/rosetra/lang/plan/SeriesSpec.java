@@ -139,9 +139,13 @@ public record SeriesSpec(String name, Series statement, Path file, String shownN
     /** How the record describes the zero. */
     public String zeroText() {
         if (hasZeroWindow()) {
-            return String.format(java.util.Locale.ROOT, "mean of %g s to %g s", zeroFrom, zeroTo);
+            return "mean of " + seconds(zeroFrom) + " s to " + seconds(zeroTo) + " s";
         }
         return zeroBaseline != null ? "baseline " + zeroBaseline : "none";
+    }
+
+    private static String seconds(double s) {
+        return java.math.BigDecimal.valueOf(s).stripTrailingZeros().toPlainString();
     }
 
     private static StringList columns(Field f, int expected) {

@@ -44,7 +44,6 @@ class SeriesRecordTest {
     }
 
     @Test
-    @Disabled("BUG: the record gives a series' zero only as a window (\"mean of 0.00000 s to 1.00000 s\"), not the per-arm values subtracted")
     void theRecordGivesTheZeroSubtractedFromEachArm(@TempDir Path dir) throws Exception {
         SyntheticSeries data = SyntheticSeries.swaying(250, 82, 18, 27);
         data.write(dir.resolve("data.csv"));
@@ -63,7 +62,6 @@ class SeriesRecordTest {
     }
 
     @Test
-    @Disabled("BUG: \"Corrections applied to the readings\" says no readings were corrected when a series had thermal output and a zero removed")
     void theCorrectionsSectionCoversASeries(@TempDir Path dir) throws Exception {
         SyntheticSeries data = SyntheticSeries.swaying(250, 83, 18, 27);
         data.write(dir.resolve("data.csv"));

@@ -47,8 +47,13 @@ public final class HtmlRecord {
     sb.append("</section>\n");
 
     section(sb, "corrections", "Corrections applied to the readings");
+    if (!r.series().isEmpty()) {
+      sb.append("<p>").append(escape(RecordTables.SERIES_CORRECTIONS)).append("</p>\n");
+    }
     if (r.corrections().isEmpty()) {
-      sb.append("<p>No readings were corrected (no rosette readings in this script).</p>\n");
+      if (r.series().isEmpty()) {
+        sb.append("<p>No readings were corrected (no rosette readings in this script).</p>\n");
+      }
     } else {
       sb.append("<p>Per case and arm, in ").append(escape(r.strainUnit()))
           .append(". A dash means the step does not apply.</p>\n");

@@ -35,8 +35,13 @@ public final class MarkdownRecord {
     }
 
     sb.append("## Corrections applied to the readings\n\n");
+    if (!r.series().isEmpty()) {
+      sb.append(escape(RecordTables.SERIES_CORRECTIONS)).append("\n\n");
+    }
     if (r.corrections().isEmpty()) {
-      sb.append("No readings were corrected (no rosette readings in this script).\n\n");
+      if (r.series().isEmpty()) {
+        sb.append("No readings were corrected (no rosette readings in this script).\n\n");
+      }
     } else {
       sb.append("Per case and arm, in ").append(escape(r.strainUnit()))
           .append(". A dash means the step does not apply.\n\n");

@@ -12,6 +12,12 @@ import org.rosetra.runtime.render.table.Row;
 /** The record's own tables, built once so the HTML and the Markdown say exactly the same. */
 final class RecordTables {
 
+  /** How the record says what happened to the readings of a measured series. */
+  static final String SERIES_CORRECTIONS = "Every sample of a measured series went through the same steps as a "
+      + "case's readings: gauge factor, bridge and lead wires, thermal output at the sample's temperature "
+      + "(when the series has a temperature column and the gauge a thermal-output polynomial), then the "
+      + "zero; the zero subtracted from each arm is given under the series below.";
+
   private RecordTables() {}
 
   static ResultTable checks(List<CheckLine> checks) {
