@@ -7,7 +7,7 @@ import org.rosetra.lang.plan.ScriptRunner;
 
 /**
  * The two commands a script's author and an editor hook run most, {@code run SCRIPT [--json
- * FILE] [--out DIR] [--allow-java]} and {@code check SCRIPT}, read without building picocli's
+ * FILE] [--out DIR] [--allow-java] [--no-record]} and {@code check SCRIPT}, read without building picocli's
  * model of every command. picocli's classes are compiled for Java 5 and cannot be kept in the
  * class-data archive, so building that model is about a fifth of a cold run (bench/startup).
  * Anything else, including every mistake and every request for help, goes to picocli, which
@@ -36,6 +36,7 @@ final class QuickStart {
         Path json = null;
         Path out = null;
         boolean allowJava = false;
+        boolean noRecord = false;
         for (int i = 1; i < args.length; i++) {
             String a = args[i];
             switch (a) {
@@ -53,6 +54,9 @@ final class QuickStart {
                 case "--allow-java":
                     allowJava = true;
                     break;
+                case "--no-record":
+                    noRecord = true;
+                    break;
                 default:
                     if (a.startsWith("-") || script != null) {
                         return Optional.empty();
@@ -63,7 +67,7 @@ final class QuickStart {
         if (script == null) {
             return Optional.empty();
         }
-        return Optional.of(runner().run(script, new RunOptions(json, out, true, allowJava)));
+        return Optional.of(runner().run(script, new RunOptions(json, out, !noRecord, allowJava)));
     }
 
     private static ScriptRunner runner() {

@@ -25,9 +25,13 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--allow-java", description = "allow functions written in Java to run")
     boolean allowJava;
 
+    @Option(names = "--no-record",
+            description = "write no output folder (no record, plots or tables); with --json, only the JSON")
+    boolean noRecord;
+
     @Override
     public Integer call() {
-        RunOptions options = new RunOptions(json, out, true, allowJava);
+        RunOptions options = new RunOptions(json, out, !noRecord, allowJava);
         return new ScriptRunner(System.out, System.err, VersionProvider.version()).run(script, options);
     }
 }

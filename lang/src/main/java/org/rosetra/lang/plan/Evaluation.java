@@ -167,6 +167,12 @@ public final class Evaluation {
     private org.rosetra.runtime.series.ReadOptions readOptions = org.rosetra.runtime.series.ReadOptions.defaults();
 
     private java.io.PrintStream progressOut;
+    private boolean digestSeries = true;
+
+    /** Whether series files are digested while read (the record names their SHA-256). */
+    public void digestSeries(boolean digest) {
+        this.digestSeries = digest;
+    }
 
     /**
      * Where series files are found, how they are read (threads, cancel flag), and where a
@@ -202,7 +208,8 @@ public final class Evaluation {
                         options = options.withProgress(bar);
                     }
                     try {
-                        out.put(spec.name(), new SeriesEvaluation(spec, this, program.checks, reductions, plots).run(options));
+                        out.put(spec.name(), new SeriesEvaluation(spec, this, program.checks, reductions, plots)
+                                .run(options, digestSeries));
                     } finally {
                         if (bar != null) {
                             bar.finish();

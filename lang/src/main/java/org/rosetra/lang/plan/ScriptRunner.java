@@ -57,6 +57,7 @@ public final class ScriptRunner {
             return ERROR;
         }
         loaded.session.allowJava(options.allowJava());
+        loaded.session.writesRecord(options.writeOutputs());
         if (System.console() != null) {
             loaded.session.progressTo(err);
         }

@@ -60,6 +60,12 @@ public final class Session {
     }
 
     private java.io.PrintStream progressOut;
+    private boolean writesRecord = true;
+
+    /** Whether a calculation record will be written (it needs the SHA-256 of every series file). */
+    public void writesRecord(boolean writes) {
+        this.writesRecord = writes;
+    }
 
     /** Draws a progress bar of long series reads here (a terminal's stderr), or nowhere (null). */
     public void progressTo(java.io.PrintStream out) {
@@ -194,6 +200,7 @@ public final class Session {
         Evaluation evaluation = new Evaluation(program);
         evaluation.allowJava(allowJava);
         evaluation.configureSeries(folder, readOptions, progressOut);
+        evaluation.digestSeries(writesRecord);
         try {
             List<CheckResult> checks = new ArrayList<>();
             for (var check : program.checks()) {
