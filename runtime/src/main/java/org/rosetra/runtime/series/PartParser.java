@@ -31,6 +31,8 @@ final class PartParser {
     private static final QuoteSeen QUOTE_SEEN = new QuoteSeen();
     private static final int INCOMPLETE = -1;
     private static final int SHOWN_TEXT_LIMIT = 40;
+    /** A longer row is no row of a measured series: most likely a file without line breaks. */
+    static final int LONGEST_ROW = 16 << 20;
 
     private final FileChannel channel;
     private final String shownName;
@@ -241,7 +243,11 @@ final class PartParser {
             pos = 0;
         }
         if (limit == buffer.length) {
-            buffer = Arrays.copyOf(buffer, buffer.length * 2);
+            if (buffer.length >= LONGEST_ROW) {
+                throw new SeriesDataException(shownName, line, null, "a row longer than " + (LONGEST_ROW >> 20)
+                        + " MiB: is this a CSV file with one row per line?");
+            }
+            buffer = Arrays.copyOf(buffer, Math.min(LONGEST_ROW, buffer.length * 2));
         }
         int want = (int) Math.min(buffer.length - limit, fileEnd - (bufferStart + limit));
         ByteBuffer target = ByteBuffer.wrap(buffer, limit, want);

@@ -18,6 +18,8 @@ import java.util.List;
 public record SeriesHeader(List<String> names, long dataStart, int lines) {
 
     private static final int FIRST_READ = 64 * 1024;
+    /** Longer than this is no header row: most likely a file without line breaks. */
+    static final int LONGEST = 1 << 20;
 
     public SeriesHeader {
         names = List.copyOf(names);
@@ -43,7 +45,11 @@ public record SeriesHeader(List<String> names, long dataStart, int lines) {
             if (want >= size) {
                 throw new SeriesDataException(shownName, 1, null, "a quote opened in the header is not closed");
             }
-            want = (int) Math.min(size, (long) want * 4);
+            if (want >= LONGEST) {
+                throw new SeriesDataException(shownName, 1, null, "the header row is longer than "
+                        + (LONGEST >> 20) + " MiB: is this a CSV file with one row per line?");
+            }
+            want = (int) Math.min(Math.min(size, LONGEST), (long) want * 4);
         }
     }
 

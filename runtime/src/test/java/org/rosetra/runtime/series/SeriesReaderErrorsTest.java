@@ -201,4 +201,16 @@ class SeriesReaderErrorsTest {
             }
         }
     }
+
+    @Test
+    void aFileWithoutLineBreaksIsRefusedNotLoaded() throws IOException {
+        String longHeader = "t_s," + "g".repeat(SeriesHeader.LONGEST + 10) + "\n0.1,1\n";
+        assertEquals("data/hoist-run.csv:1: error: the header row is longer than 1 MiB: is this a CSV file with"
+                + " one row per line?", errorOf(source(longHeader)).getMessage());
+        String longRow = HEADER + "0.001,1,2,3\n0.002,1,2," + "3".repeat(PartParser.LONGEST_ROW + 10) + "\n";
+        SeriesDataException e = assertThrows(SeriesDataException.class,
+                () -> SeriesReader.stream(source(longRow), ReadOptions.defaults(), chunk -> true));
+        assertEquals("data/hoist-run.csv:3: error: a row longer than 16 MiB: is this a CSV file with one row per line?",
+                e.getMessage());
+    }
 }
