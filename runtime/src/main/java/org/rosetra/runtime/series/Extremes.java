@@ -17,43 +17,42 @@ public final class Extremes {
 
     /** Adds rows {@code 0..n-1} of a column and its times, in time order. */
     public void add(double[] values, double[] times, int n) {
-        double hi = max;
-        double lo = min;
-        double tHi = timeOfMax;
-        double tLo = timeOfMin;
+        // Two light passes instead of one branchy one: the chunk's largest and smallest value
+        // (conditional moves, no unpredictable branches), then, only when one of them beats the
+        // running extreme, the first sample that holds it (ties keep the earliest).
+        double hi = Double.NEGATIVE_INFINITY;
+        double lo = Double.POSITIVE_INFINITY;
         long skipped = 0;
-        int i = 0;
-        if (hi != hi) {
-            // Nothing defined yet: the first defined value starts both ends.
-            while (i < n && values[i] != values[i]) {
-                i++;
-                skipped++;
-            }
-            if (i < n) {
-                hi = lo = values[i];
-                tHi = tLo = times[i];
-                i++;
-            }
-        }
-        for (; i < n; i++) {
+        for (int i = 0; i < n; i++) {
             double v = values[i];
-            if (v > hi) {
-                hi = v;
-                tHi = times[i];
-            } else if (v < lo) {
-                lo = v;
-                tLo = times[i];
-            } else if (v != v) {
-                skipped++;
-            }
+            hi = v > hi ? v : hi;
+            lo = v < lo ? v : lo;
+            skipped += v != v ? 1 : 0;
         }
-        max = hi;
-        min = lo;
-        timeOfMax = tHi;
-        timeOfMin = tLo;
         count += n;
         notNumbers += skipped;
+        if (skipped == n) {
+            return;
+        }
+        if (max != max || hi > max) {
+            max = hi;
+            timeOfMax = times[firstIndexOf(values, hi, n)];
+        }
+        if (min != min || lo < min) {
+            min = lo;
+            timeOfMin = times[firstIndexOf(values, lo, n)];
+        }
     }
+
+    private static int firstIndexOf(double[] values, double v, int n) {
+        for (int i = 0; i < n; i++) {
+            if (values[i] == v) {
+                return i;
+            }
+        }
+        throw new IllegalStateException("a chunk's extreme is not in the chunk");
+    }
+
 
     /** Merges {@code later}, whose samples all come after this one's, into this one. */
     public Extremes merge(Extremes later) {
