@@ -35,23 +35,6 @@ public final class NearestName {
 
     /** Levenshtein distance where a change of letter case alone counts as zero. */
     static int distance(String a, String b) {
-        String x = a.toLowerCase(java.util.Locale.ROOT);
-        String y = b.toLowerCase(java.util.Locale.ROOT);
-        int[] previous = new int[y.length() + 1];
-        int[] current = new int[y.length() + 1];
-        for (int j = 0; j <= y.length(); j++) {
-            previous[j] = j;
-        }
-        for (int i = 1; i <= x.length(); i++) {
-            current[0] = i;
-            for (int j = 1; j <= y.length(); j++) {
-                int substitution = previous[j - 1] + (x.charAt(i - 1) == y.charAt(j - 1) ? 0 : 1);
-                current[j] = Math.min(substitution, Math.min(previous[j], current[j - 1]) + 1);
-            }
-            int[] swap = previous;
-            previous = current;
-            current = swap;
-        }
-        return previous[y.length()];
+        return org.rosetra.runtime.text.EditDistance.between(a, b);
     }
 }

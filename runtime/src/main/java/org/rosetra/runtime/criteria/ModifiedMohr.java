@@ -22,10 +22,7 @@ public final class ModifiedMohr {
     }
 
     public static double index(double s1, double s2, double s3, double ultimate, double ultimateC) {
-        CriterionException.requireFinite(NAME, "a principal stress", s1 + s2 + s3);
-        CriterionException.requirePositive(NAME, "ultimate", ultimate);
-        CriterionException.requirePositive(NAME, "ultimate_c", ultimateC);
-        return raw(s1, s2, s3, ultimate, ultimateC);
+        return StrengthIndex.index(NAME, ModifiedMohr::of, s1, s2, s3, ultimate, ultimateC);
     }
 
     /** With the strengths of {@code material}; an error names the strength it lacks. */
@@ -36,27 +33,17 @@ public final class ModifiedMohr {
     /** out[i] = index(s1[i], s2[i], s3[i], ultimate, ultimateC) for i < n. */
     public static void index(double[] s1, double[] s2, double[] s3, int n,
                              double ultimate, double ultimateC, double[] out) {
-        CriterionException.requireColumns(NAME, n, s1, s2, s3, out);
-        CriterionException.requirePositive(NAME, "ultimate", ultimate);
-        CriterionException.requirePositive(NAME, "ultimate_c", ultimateC);
-        for (int i = 0; i < n; i++) {
-            double v = raw(s1[i], s2[i], s3[i], ultimate, ultimateC);
-            if (!Double.isFinite(v)) {
-                CriterionException.requireFinite(NAME, "value " + i, v);
-            }
-            out[i] = v;
-        }
+        StrengthIndex.index(NAME, ModifiedMohr::of, s1, s2, s3, n, ultimate, ultimateC, out);
     }
 
-    private static double raw(double s1, double s2, double s3, double sut, double suc) {
-        double sA = Math.max(s1, Math.max(s2, s3));
-        double sB = Math.min(s1, Math.min(s2, s3));
+    /** The index for sA and sB, the largest and smallest of the three principal stresses. */
+    static double of(double sA, double sB, double ultimate, double ultimateC) {
         if (sA < 0) {
-            return -sB / suc;
+            return -sB / ultimateC;
         }
         if (sB >= -sA) {
-            return sA / sut;
+            return sA / ultimate;
         }
-        return (suc - sut) * sA / (suc * sut) - sB / suc;
+        return (ultimateC - ultimate) * sA / (ultimateC * ultimate) - sB / ultimateC;
     }
 }

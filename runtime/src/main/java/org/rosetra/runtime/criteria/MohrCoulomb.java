@@ -15,10 +15,7 @@ public final class MohrCoulomb {
     }
 
     public static double index(double s1, double s2, double s3, double ultimate, double ultimateC) {
-        CriterionException.requireFinite(NAME, "a principal stress", s1 + s2 + s3);
-        CriterionException.requirePositive(NAME, "ultimate", ultimate);
-        CriterionException.requirePositive(NAME, "ultimate_c", ultimateC);
-        return raw(s1, s2, s3, ultimate, ultimateC);
+        return StrengthIndex.index(NAME, MohrCoulomb::of, s1, s2, s3, ultimate, ultimateC);
     }
 
     /** With the strengths of {@code material}; an error names the strength it lacks. */
@@ -29,21 +26,11 @@ public final class MohrCoulomb {
     /** out[i] = index(s1[i], s2[i], s3[i], ultimate, ultimateC) for i < n. */
     public static void index(double[] s1, double[] s2, double[] s3, int n,
                              double ultimate, double ultimateC, double[] out) {
-        CriterionException.requireColumns(NAME, n, s1, s2, s3, out);
-        CriterionException.requirePositive(NAME, "ultimate", ultimate);
-        CriterionException.requirePositive(NAME, "ultimate_c", ultimateC);
-        for (int i = 0; i < n; i++) {
-            double v = raw(s1[i], s2[i], s3[i], ultimate, ultimateC);
-            if (!Double.isFinite(v)) {
-                CriterionException.requireFinite(NAME, "value " + i, v);
-            }
-            out[i] = v;
-        }
+        StrengthIndex.index(NAME, MohrCoulomb::of, s1, s2, s3, n, ultimate, ultimateC, out);
     }
 
-    private static double raw(double s1, double s2, double s3, double ultimate, double ultimateC) {
-        double sA = Math.max(s1, Math.max(s2, s3));
-        double sB = Math.min(s1, Math.min(s2, s3));
+    /** The index for sA and sB, the largest and smallest of the three principal stresses. */
+    static double of(double sA, double sB, double ultimate, double ultimateC) {
         return Math.max(sA, 0) / ultimate + Math.max(-sB, 0) / ultimateC;
     }
 }

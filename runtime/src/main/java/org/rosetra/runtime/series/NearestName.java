@@ -25,21 +25,6 @@ final class NearestName {
 
     /** Levenshtein distance: insertions, deletions and substitutions of one character. */
     static int editDistance(String a, String b) {
-        int[] previous = new int[b.length() + 1];
-        int[] current = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            previous[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            current[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int substitution = previous[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
-                current[j] = Math.min(substitution, Math.min(previous[j], current[j - 1]) + 1);
-            }
-            int[] t = previous;
-            previous = current;
-            current = t;
-        }
-        return previous[b.length()];
+        return org.rosetra.runtime.text.EditDistance.between(a, b);
     }
 }
