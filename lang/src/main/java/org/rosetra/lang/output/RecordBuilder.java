@@ -137,8 +137,10 @@ public final class RecordBuilder {
                             new Column("at", "s"), new Column("first", "s"), new Column("last", "s")), flagged);
             items.add(new RecordItem.TableItem(unique("implausible-readings", used), table));
         }
+        String recordName = evaluation.program().reportName() != null ? evaluation.program().reportName()
+                : scriptName.replaceFirst("\\.strain$", "");
         return new CalculationRecord(title, checks, declarations, strain.symbol(), corrections, items, series,
-                scriptName, scriptText, allInputs, toolVersion);
+                scriptName, scriptText, allInputs, toolVersion, recordName);
     }
 
     private static org.rosetra.runtime.render.record.Declaration declaration(Declaration d, Evaluation evaluation,

@@ -21,7 +21,8 @@ public record CalculationRecord(
     String scriptName,
     String script,
     List<InputFile> inputs,
-    String toolVersion) {
+    String toolVersion,
+    String recordName) {
 
   public CalculationRecord {
     Objects.requireNonNull(title, "title");
@@ -29,11 +30,21 @@ public record CalculationRecord(
     Objects.requireNonNull(scriptName, "scriptName");
     Objects.requireNonNull(script, "script");
     Objects.requireNonNull(toolVersion, "toolVersion");
+    Objects.requireNonNull(recordName, "recordName");
     checks = List.copyOf(checks);
     declarations = List.copyOf(declarations);
     corrections = List.copyOf(corrections);
     outputs = List.copyOf(outputs);
     series = List.copyOf(series);
     inputs = List.copyOf(inputs);
+  }
+
+  /** A record named after its script (the script gave no {@code report} name). */
+  public CalculationRecord(String title, List<CheckLine> checks, List<Declaration> declarations,
+      String strainUnit, List<ArmCorrection> corrections, List<RecordItem> outputs,
+      List<SeriesInput> series, String scriptName, String script, List<InputFile> inputs,
+      String toolVersion) {
+    this(title, checks, declarations, strainUnit, corrections, outputs, series, scriptName, script,
+        inputs, toolVersion, scriptName.replaceFirst("\\.strain$", ""));
   }
 }

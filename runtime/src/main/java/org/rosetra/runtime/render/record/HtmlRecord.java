@@ -21,6 +21,9 @@ public final class HtmlRecord {
         .append("<style>\n").append(RecordStyle.CSS).append("</style>\n</head>\n<body>\n");
 
     sb.append("<header>\n<h1>").append(escape(r.title())).append("</h1>\n")
+        .append("<p class=\"meta\">Record ").append(escape(r.recordName())).append(", from the script ")
+        .append(escape(r.scriptName())).append(", written by Rosetra ").append(escape(r.toolVersion()))
+        .append("</p>\n")
         .append("<p class=\"caution\" role=\"note\"><strong>Caution.</strong> ")
         .append(escape(Caution.TEXT)).append("</p>\n</header>\n");
 

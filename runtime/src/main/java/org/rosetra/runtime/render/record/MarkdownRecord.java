@@ -14,6 +14,8 @@ public final class MarkdownRecord {
   public static String render(CalculationRecord r) {
     StringBuilder sb = new StringBuilder(1 << 14);
     sb.append("# ").append(escape(r.title())).append("\n\n");
+    sb.append("Record ").append(escape(r.recordName())).append(", from the script ").append(escape(r.scriptName()))
+        .append(", written by Rosetra ").append(escape(r.toolVersion())).append(".\n\n");
     sb.append("> **Caution.** ").append(escape(Caution.TEXT)).append("\n\n");
 
     sb.append("## Summary of checks\n\n");

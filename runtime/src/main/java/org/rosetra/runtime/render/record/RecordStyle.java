@@ -37,6 +37,7 @@ final class RecordStyle {
               + " background: #f6f7f9; border: 1px solid #dde1e6; padding: 0.6em; white-space: pre-wrap; }",
           ".ln { color: #8a919a; user-select: none; }",
           "footer { margin-top: 2em; font-size: 9pt; color: #4a525c; }",
+          ".meta { margin: -0.4em 0 0.8em 0; color: #4a525c; font-size: 10pt; }",
           "@page { size: auto; margin: 16mm 14mm; }",
           "@media print {",
           "  body { max-width: none; padding: 0; font-size: 10pt; }",
