@@ -64,7 +64,11 @@ public final class StartupPhases {
       step("tables as text");
       byte[] json = ResultsJson.write(outcome.results());
       step("results as JSON (Jackson)");
-      OutputFolder.write(out, new ScriptRunner.Loaded(script, script.toString(), text, session), outcome, json);
+      var inputs = java.util.List.of(org.rosetra.lang.output.RecordBuilder.input(script.getFileName().toString(), text));
+      var record = org.rosetra.lang.output.RecordBuilder.build(script.getFileName().toString(), text, outcome, session,
+          inputs, "bench");
+      step("record assembled");
+      OutputFolder.write(out, record, json);
       OutputFolder.writeAtomically(out.resolve("x.json"), json);
       step("output folder and --json file");
     }

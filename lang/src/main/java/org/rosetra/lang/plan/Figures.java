@@ -205,27 +205,27 @@ final class Figures {
     }
 
     /**
-     * Draws a figure as SVG here and as PNG on a second thread at the same time, each from its
-     * own copy of the figure (a chart is not drawn by two threads at once). The bytes are the
-     * same as drawing one after the other.
+     * Starts drawing a figure as SVG and as PNG, each on a thread of its own from its own copy
+     * of the figure (a chart is never drawn by two threads at once); the statement's other
+     * work goes on meanwhile. The bytes are the same as drawing one after the other.
      */
     private static Output figure(Plot plot, String caption, String stem, Supplier<Figure> make) {
         CompletableFuture<byte[]> png = CompletableFuture.supplyAsync(() -> PngEncoder.encode(make.get().painting()), DRAWING);
-        Painting painting = make.get().painting();
-        byte[] svg = SvgEncoder.encode(painting);
-        byte[] pngBytes;
-        try {
-            pngBytes = png.join();
-        } catch (CompletionException e) {
-            throw e.getCause() instanceof RuntimeException r ? r : e;
-        }
-        RenderedFigure rendered = new RenderedFigure(FileStem.from(stem), painting.width(), painting.height(), svg, pngBytes);
-        return new Output.FigureOutput(plot, caption, rendered);
+        CompletableFuture<Painting> painting = CompletableFuture.supplyAsync(() -> make.get().painting(), DRAWING);
+        CompletableFuture<byte[]> svg = painting.thenApplyAsync(SvgEncoder::encode, DRAWING);
+        return new Output.PendingFigure(plot, caption, () -> {
+            try {
+                Painting p = painting.join();
+                return new RenderedFigure(FileStem.from(stem), p.width(), p.height(), svg.join(), png.join());
+            } catch (CompletionException e) {
+                throw e.getCause() instanceof RuntimeException r ? r : e;
+            }
+        });
     }
 
-    /** Draws PNGs beside the main thread; daemon threads, so they never keep the JVM alive. */
+    /** Draws figures beside the main thread; daemon threads, so they never keep the JVM alive. */
     private static final Executor DRAWING = task -> {
-        Thread t = new Thread(task, "rosetra-png");
+        Thread t = new Thread(task, "rosetra-drawing");
         t.setDaemon(true);
         t.start();
     };
