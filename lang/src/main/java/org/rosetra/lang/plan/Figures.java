@@ -4,14 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
-import java.util.concurrent.Executor;
 import java.util.function.Function;
 import java.util.function.Supplier;
-import org.rosetra.runtime.render.plot.Painting;
-import org.rosetra.runtime.render.plot.PngEncoder;
-import org.rosetra.runtime.render.plot.SvgEncoder;
 import org.rosetra.lang.syntax.Check;
 import org.rosetra.lang.syntax.ComparisonOp;
 import org.rosetra.lang.syntax.Plot;
@@ -27,7 +21,6 @@ import org.rosetra.runtime.render.plot.HistoryFigure;
 import org.rosetra.runtime.render.plot.Limit;
 import org.rosetra.runtime.render.plot.MohrCircle;
 import org.rosetra.runtime.render.plot.MohrFigure;
-import org.rosetra.runtime.render.plot.RenderedFigure;
 import org.rosetra.runtime.strain.StrainState;
 import org.rosetra.runtime.stress.Hooke;
 import org.rosetra.runtime.stress.StressState;
@@ -205,28 +198,11 @@ final class Figures {
     }
 
     /**
-     * Starts drawing a figure as SVG and as PNG, each on a thread of its own from its own copy
-     * of the figure (a chart is never drawn by two threads at once); the statement's other
-     * work goes on meanwhile. The bytes are the same as drawing one after the other.
+     * Draws a figure as SVG and as PNG, one after the other on this thread: drawing on several
+     * threads at once measured slower here (bench/startup), the drawing code contending with itself.
      */
     private static Output figure(Plot plot, String caption, String stem, Supplier<Figure> make) {
-        CompletableFuture<byte[]> png = CompletableFuture.supplyAsync(() -> PngEncoder.encode(make.get().painting()), DRAWING);
-        CompletableFuture<Painting> painting = CompletableFuture.supplyAsync(() -> make.get().painting(), DRAWING);
-        CompletableFuture<byte[]> svg = painting.thenApplyAsync(SvgEncoder::encode, DRAWING);
-        return new Output.PendingFigure(plot, caption, () -> {
-            try {
-                Painting p = painting.join();
-                return new RenderedFigure(FileStem.from(stem), p.width(), p.height(), svg.join(), png.join());
-            } catch (CompletionException e) {
-                throw e.getCause() instanceof RuntimeException r ? r : e;
-            }
-        });
+        return new Output.FigureOutput(plot, caption, make.get().render(FileStem.from(stem)));
     }
 
-    /** Draws figures beside the main thread; daemon threads, so they never keep the JVM alive. */
-    private static final Executor DRAWING = task -> {
-        Thread t = new Thread(task, "rosetra-drawing");
-        t.setDaemon(true);
-        t.start();
-    };
 }

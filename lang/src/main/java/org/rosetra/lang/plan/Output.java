@@ -13,12 +13,4 @@ public sealed interface Output {
 
     /** A figure drawn as SVG and PNG, saved as {@code plots/NAME.svg} and {@code .png}. */
     record FigureOutput(Statement statement, String caption, RenderedFigure figure) implements Output {}
-
-    /** A figure still being drawn on other threads; {@link #done()} waits for it. */
-    record PendingFigure(Statement statement, String caption, java.util.function.Supplier<RenderedFigure> drawing)
-            implements Output {
-        FigureOutput done() {
-            return new FigureOutput(statement, caption, drawing.get());
-        }
-    }
 }

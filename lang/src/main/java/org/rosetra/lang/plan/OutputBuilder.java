@@ -70,8 +70,6 @@ final class OutputBuilder {
                 out.addAll(Figures.of(p, evaluation, display, this::textOf));
             }
         }
-        // Figures were drawn meanwhile on other threads; collect them in script order.
-        out.replaceAll(o -> o instanceof Output.PendingFigure f ? f.done() : o);
         return out;
     }
 
