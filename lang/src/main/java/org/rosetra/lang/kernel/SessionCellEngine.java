@@ -87,12 +87,26 @@ public final class SessionCellEngine implements CellEngine {
         try {
             outcome = session.evaluate(diagnostics, mine::contains, false);
         } catch (SeriesCancelledException e) {
-            return CellOutcome.failed("Interrupted", "the cell was stopped while reading a series", List.of(
-                    "the cell was stopped while reading a series; nothing it computed was kept"));
+            session.forget(source);
+            return interrupted();
         }
         if (!outcome.ok()) {
             session.forget(source);
             return failure(diagnostics);
+        }
+        List<String> values;
+        try {
+            values = org.rosetra.lang.repl.EntryReport.values(outcome, statements);
+        } catch (org.rosetra.lang.plan.EvaluationException e) {
+            diagnostics.error(e.span(), e.getMessage(), e.hint());
+            session.forget(source);
+            return failure(diagnostics);
+        } catch (SeriesCancelledException e) {
+            session.forget(source);
+            return interrupted();
+        }
+        if (!values.isEmpty()) {
+            sink.display(MimeBundle.plain(String.join("\n", values)));
         }
         for (Output o : outcome.outputs()) {
             sink.display(bundleOf(o));
@@ -107,6 +121,11 @@ public final class SessionCellEngine implements CellEngine {
             sink.display(MimeBundle.plain(verdicts.toString().replace("**", "")).with("text/markdown", verdicts.toString()));
         }
         return CellOutcome.nothingToShow();
+    }
+
+    private static CellOutcome interrupted() {
+        return CellOutcome.failed("Interrupted", "the cell was stopped while reading a series", List.of(
+                "the cell was stopped while reading a series; what it defined was taken back"));
     }
 
     static MimeBundle bundleOf(Output o) {

@@ -13,11 +13,23 @@ import org.rosetra.lang.syntax.Statement;
 import org.rosetra.runtime.render.table.PlainTextTable;
 
 /** What an entry that computed prints: its values, its tables and figures, its checks' verdicts. */
-final class EntryReport {
+public final class EntryReport {
     private EntryReport() {
     }
 
     static String of(Outcome outcome, List<Statement> added) {
+        List<String> parts = new ArrayList<>(values(outcome, added));
+        parts.addAll(outputs(outcome, added));
+        for (CheckResult c : outcome.checks()) {
+            if (added.stream().anyMatch(s -> s == c.check())) {
+                parts.add(org.rosetra.lang.plan.ScriptRunner.verdict(c));
+            }
+        }
+        return String.join("\n", parts);
+    }
+
+    /** The values the added {@code let}s name, in display units: {@code allowable = 236.7 MPa}. */
+    public static List<String> values(Outcome outcome, List<Statement> added) {
         List<String> parts = new ArrayList<>();
         for (Statement s : added) {
             if (s instanceof Let let && !let.isFunction()) {
@@ -26,13 +38,7 @@ final class EntryReport {
                 parts.add(value instanceof Value.Column ? shown : let.name().text() + " = " + shown);
             }
         }
-        parts.addAll(outputs(outcome, added));
-        for (CheckResult c : outcome.checks()) {
-            if (added.stream().anyMatch(s -> s == c.check())) {
-                parts.add(org.rosetra.lang.plan.ScriptRunner.verdict(c));
-            }
-        }
-        return String.join("\n", parts);
+        return parts;
     }
 
     /** The outputs of the statements an entry added, as text. */
