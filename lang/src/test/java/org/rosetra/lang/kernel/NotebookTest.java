@@ -10,7 +10,6 @@ import java.util.Map;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.condition.EnabledIfSystemProperty;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -46,12 +45,26 @@ class NotebookTest {
     }
 
     @Test
-    void runsTheExampleNotebooks() throws Exception {
-        PythonClient.require("jupyter_client", "nbclient", "nbformat");
-        Path examples = Path.of(System.getProperty("rosetra.examples", "../examples"), "notebook");
-        Assumptions.assumeTrue(Files.isDirectory(examples), "no " + examples);
+    void anInterruptStopsALongSeriesReadCleanly() throws Exception {
+        PythonClient.require("jupyter_client");
         Map<String, String> environment = jupyterFolders();
-        // The real kernel of this build, started from the test classes (the jar is made later).
+        installThisBuild(environment);
+        // An invented log long enough that reading it takes well over the interrupt's delay.
+        Path data = folder.resolve("long.csv");
+        try (var out = new java.io.PrintWriter(Files.newBufferedWriter(data))) {
+            out.println("t_s,g1,g2,g3");
+            for (int i = 0; i < 3_000_000; i++) {
+                out.printf(java.util.Locale.ROOT, "%d.%03d,%d.25,%d.5,-%d.75%n", i / 1000, i % 1000,
+                        100 + i % 400, 50 + i % 300, 20 + i % 200);
+            }
+        }
+        PythonClient.Result result = PythonClient.run("interrupt_series.py", environment,
+                KernelSpec.NAME, folder.toString());
+        assertEquals(0, result.exitCode(), result.output());
+    }
+
+    /** The real kernel of this build, started from the test classes (the jar is made later). */
+    private static void installThisBuild(Map<String, String> environment) throws IOException {
         List<String> argv = List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "-cp", System.getProperty("java.class.path"), "org.rosetra.lang.cli.Main",
                 "kernel", "--no-warm-up", "--connection-file", "{connection_file}");
@@ -63,6 +76,15 @@ class NotebookTest {
         };
         Path specFolder = Files.createDirectories(Path.of(environment.get("JUPYTER_DATA_DIR"), "kernels", KernelSpec.NAME));
         Files.write(specFolder.resolve("kernel.json"), spec.toBytes());
+    }
+
+    @Test
+    void runsTheExampleNotebooks() throws Exception {
+        PythonClient.require("jupyter_client", "nbclient", "nbformat");
+        Path examples = Path.of(System.getProperty("rosetra.examples", "../examples"), "notebook");
+        Assumptions.assumeTrue(Files.isDirectory(examples), "no " + examples);
+        Map<String, String> environment = jupyterFolders();
+        installThisBuild(environment);
         List<Path> notebooks;
         try (Stream<Path> files = Files.list(examples)) {
             notebooks = files.filter(file -> file.toString().endsWith(".ipynb")).sorted().toList();
