@@ -216,17 +216,9 @@ public final class SessionCellEngine implements CellEngine {
     /** The text of the statement defining {@code name}, as it was written, or null. */
     private String definitionOf(String name) {
         Statement s = session.definitionOf(name);
-        String source = s == null ? null : session.sourceOf(s.span().file());
-        if (source == null) {
-            return null;
-        }
-        String[] lines = source.split("\n", -1);
-        StringBuilder out = new StringBuilder();
-        for (int line = s.span().line(); line <= s.span().endLine() && line <= lines.length; line++) {
-            out.append(lines[line - 1]).append('\n');
-        }
-        return out.toString().stripTrailing();
+        return s == null ? null : session.textOf(s.span());
     }
+
 
     @Override
     public Completeness isComplete(String code) {

@@ -194,22 +194,10 @@ public final class RecordBuilder {
     }
 
     private static String textOf(SourceSpan span, Session session) {
-        String source = session.sourceOf(span.file());
-        if (source == null) {
-            return "";
-        }
-        String[] lines = source.split("\n", -1);
-        StringBuilder s = new StringBuilder();
-        for (int line = span.line(); line <= span.endLine() && line <= lines.length; line++) {
-            String text = lines[line - 1];
-            int from = line == span.line() ? Math.max(0, span.column() - 1) : 0;
-            int to = line == span.endLine() ? Math.min(text.length(), span.endColumn() - 1) : text.length();
-            if (from < to) {
-                s.append(s.length() > 0 ? " " : "").append(text, from, to);
-            }
-        }
-        return s.toString().strip();
+        String text = session.textOf(span);
+        return text == null ? "" : text.replace('\n', ' ');
     }
+
 
     private static String unique(String stem, Set<String> used) {
         String s = stem;

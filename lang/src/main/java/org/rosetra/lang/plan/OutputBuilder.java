@@ -194,17 +194,8 @@ final class OutputBuilder {
 
     /** The text of an expression as the script wrote it. */
     String textOf(SourceSpan span) {
-        String source = span == null ? null : session.sourceOf(span.file());
-        if (source == null) {
-            return "value";
-        }
-        String[] lines = source.split("\n", -1);
-        if (span.line() < 1 || span.line() > lines.length) {
-            return "value";
-        }
-        String line = lines[span.line() - 1];
-        int from = Math.max(0, span.column() - 1);
-        int to = span.endLine() == span.line() ? Math.min(line.length(), span.endColumn() - 1) : line.length();
-        return from < to ? line.substring(from, to).strip() : "value";
+        String text = session.textOf(span);
+        return text == null || text.isEmpty() ? "value" : text.replace('\n', ' ');
     }
+
 }

@@ -128,6 +128,31 @@ public final class Session {
         return out;
     }
 
+    /**
+     * The text a span covers, as it was written (lines kept), or null when the session has not
+     * seen its file. Headers of tables, the record's declarations and inspection show it.
+     */
+    public String textOf(org.rosetra.lang.syntax.SourceSpan span) {
+        String source = span == null ? null : sourceText.get(span.file());
+        if (source == null) {
+            return null;
+        }
+        String[] lines = source.split("\r?\n", -1);
+        StringBuilder out = new StringBuilder();
+        for (int line = span.line(); line <= span.endLine() && line >= 1 && line <= lines.length; line++) {
+            String text = lines[line - 1];
+            int from = line == span.line() ? Math.max(0, span.column() - 1) : 0;
+            int to = line == span.endLine() ? Math.min(text.length(), span.endColumn() - 1) : text.length();
+            if (out.length() > 0) {
+                out.append('\n');
+            }
+            if (from < to) {
+                out.append(text, from, to);
+            }
+        }
+        return out.toString().strip();
+    }
+
     /** Every name defined so far (declarations, readings, series, values), in order. */
     public List<String> definedNames() {
         List<String> names = new ArrayList<>();
