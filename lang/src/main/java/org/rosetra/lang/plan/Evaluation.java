@@ -413,16 +413,7 @@ public final class Evaluation {
 
     /** A rosette's readings in arm order, as strain fractions. */
     double[] readings(Field f, RosetteModel model) {
-        double[] values;
-        if (f.value() instanceof ReadingList list) {
-            double scale = list.unitText() == null ? 1.0 : UnitParser.parse(list.unitText()).scale();
-            values = new double[list.values().size()];
-            for (int i = 0; i < values.length; i++) {
-                values[i] = list.values().get(i) * scale;
-            }
-        } else {
-            values = new double[] {expressions.number(f.value(), Dimension.NONE, Map.of(), "a reading")};
-        }
+        double[] values = expressions.numbers(f.value(), "a reading");
         if (values.length != model.armCount()) {
             throw new EvaluationException(f.value().span(), "rosette " + model.name() + " has "
                     + model.armCount() + " arms but " + values.length + " readings are given",

@@ -85,6 +85,22 @@ public final class Expressions {
         throw new EvaluationException(e.span(), what + " needs a single number, got " + kindOf(v));
     }
 
+    /**
+     * The numbers of a field in SI: a list of readings with its one unit ({@code 412, -38,
+     * -121 ue}), or a single dimensionless value.
+     */
+    double[] numbers(Expr value, String what) {
+        if (value instanceof ReadingList list) {
+            double scale = list.unitText() == null ? 1.0 : UnitParser.parse(list.unitText()).scale();
+            double[] out = new double[list.values().size()];
+            for (int i = 0; i < out.length; i++) {
+                out[i] = list.values().get(i) * scale;
+            }
+            return out;
+        }
+        return new double[] {number(value, Dimension.NONE, Map.of(), what)};
+    }
+
     private Value eval(Expr e, Scope params) {
         if (e instanceof NumberLit n) {
             return new Value.Number(n.value(), Dimension.NONE);

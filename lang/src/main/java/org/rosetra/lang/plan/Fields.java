@@ -71,14 +71,7 @@ final class Fields {
 
     /** A list of numbers in SI, for fields such as a gauge's thermal-output coefficients. */
     double[] list(Field f) {
-        if (f.value() instanceof ReadingList list) {
-            double scale = list.unitText() == null ? 1.0 : UnitParser.parse(list.unitText()).scale();
-            double[] out = new double[list.values().size()];
-            for (int i = 0; i < out.length; i++) {
-                out[i] = list.values().get(i) * scale;
-            }
-            return out;
-        }
-        return new double[] {expressions.number(f.value(), Dimension.NONE, Map.of(), "field " + f.name().text())};
+        return expressions.numbers(f.value(), "field " + f.name().text());
     }
+
 }
