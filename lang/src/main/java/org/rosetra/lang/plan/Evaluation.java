@@ -238,6 +238,15 @@ public final class Evaluation {
      * threads, so that the threads only ever read what is kept here.
      */
     private void warmUp() {
+        buildDeclarations();
+        reduce();
+        for (String r : rosetteNames()) {
+            results(r);
+        }
+    }
+
+    /** Builds every material, gauge, rosette and state as the runtime will use it. */
+    void buildDeclarations() {
         for (Declaration d : program.declarations.values()) {
             switch (d.kind()) {
                 case MATERIAL -> material(d.name().text());
@@ -245,10 +254,6 @@ public final class Evaluation {
                 case ROSETTE -> rosette(d.name().text());
                 default -> state(d.name().text());
             }
-        }
-        reduce();
-        for (String r : rosetteNames()) {
-            results(r);
         }
     }
 

@@ -191,9 +191,24 @@ public final class Session {
         return all;
     }
 
-    /** Checks every statement in force without computing anything. */
+    /**
+     * Checks every statement in force without reading or reducing anything: names and
+     * dimensions, then every declaration built as the runtime will use it (a material whose
+     * E, nu and G disagree, a layout with two arms in one direction, a lead wire without a bridge).
+     */
     public void check(Diagnostics diagnostics) {
-        CheckerBridge.check(new Script("(session)", statements()), diagnostics);
+        List<Statement> all = statements();
+        CheckerBridge.check(new Script("(session)", all), diagnostics);
+        if (diagnostics.hasErrors()) {
+            return;
+        }
+        try {
+            new Evaluation(Program.of(all)).buildDeclarations();
+        } catch (EvaluationException e) {
+            diagnostics.error(e.span(), e.getMessage(), e.hint());
+        } catch (Evaluation.CycleException e) {
+            diagnostics.error(all.get(0).span(), e.getMessage());
+        }
     }
 
     /** Checks every statement in force, then computes it; errors come back as diagnostics. */
