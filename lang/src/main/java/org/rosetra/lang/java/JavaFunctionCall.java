@@ -53,10 +53,10 @@ public final class JavaFunctionCall {
     }
 
     private static void checkArgument(String function, int index, Param p, Value argument, SourceSpan callSite) {
-        Dimension actual = dimensionOf(argument);
+        Dimension actual = argument.dimensionOrNull();
         if (actual == null) {
             throw new EvaluationException(callSite, "argument " + (index + 1) + " of " + function
-                    + " must be a number for Java, got " + kind(argument),
+                    + " must be a number for Java, got " + org.rosetra.lang.plan.Expressions.kindOf(argument),
                     argument instanceof Value.Rosette ? "pick a member, such as .von_mises" : null);
         }
         Dimension declared = DeclaredDimension.of(p.dimension(), null);
@@ -64,34 +64,5 @@ public final class JavaFunctionCall {
             throw new EvaluationException(callSite, "argument " + (index + 1) + " of " + function + " ("
                     + p.name().text() + ") must be " + declared + ", got " + actual);
         }
-    }
-
-    static Dimension dimensionOf(Value v) {
-        if (v instanceof Value.Number n) {
-            return n.dimension();
-        }
-        if (v instanceof Value.Column c) {
-            return c.dimension();
-        }
-        if (v instanceof Value.History h) {
-            return h.dimension();
-        }
-        return null;
-    }
-
-    private static String kind(Value v) {
-        if (v instanceof Value.Rosette || v instanceof Value.RosetteInCase) {
-            return "a rosette";
-        }
-        if (v instanceof Value.State) {
-            return "a state";
-        }
-        if (v instanceof Value.MaterialRef) {
-            return "a material";
-        }
-        if (v instanceof Value.Function) {
-            return "a function";
-        }
-        return "text";
     }
 }

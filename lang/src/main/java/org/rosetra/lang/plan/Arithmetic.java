@@ -223,14 +223,9 @@ final class Arithmetic {
     }
 
     static Dimension dimension(Value v, SourceSpan at) {
-        if (v instanceof Value.Number n) {
-            return n.dimension();
-        }
-        if (v instanceof Value.Column c) {
-            return c.dimension();
-        }
-        if (v instanceof Value.History h) {
-            return h.dimension();
+        Dimension d = v.dimensionOrNull();
+        if (d != null) {
+            return d;
         }
         throw new EvaluationException(at, "arithmetic needs numbers, got " + Expressions.kindOf(v),
                 v instanceof Value.Rosette ? "pick a member, such as .von_mises" : null);

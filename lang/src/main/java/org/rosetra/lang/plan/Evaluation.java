@@ -15,11 +15,9 @@ import org.rosetra.lang.syntax.Call;
 import org.rosetra.lang.syntax.Case;
 import org.rosetra.lang.syntax.Combine;
 import org.rosetra.lang.syntax.Declaration;
-import org.rosetra.lang.syntax.Expr;
 import org.rosetra.lang.syntax.Field;
 import org.rosetra.lang.syntax.Let;
 import org.rosetra.lang.syntax.NameRef;
-import org.rosetra.lang.syntax.ReadingList;
 import org.rosetra.lang.syntax.SourceSpan;
 import org.rosetra.lang.syntax.Term;
 import org.rosetra.runtime.gauge.ArmCorrection;
@@ -36,7 +34,6 @@ import org.rosetra.runtime.stress.Hooke;
 import org.rosetra.runtime.stress.PlaneCondition;
 import org.rosetra.runtime.stress.StressState;
 import org.rosetra.runtime.units.Dimension;
-import org.rosetra.runtime.units.UnitParser;
 
 /**
  * The computation of one checked program: every declaration turned into runtime objects, every

@@ -538,7 +538,8 @@ public final class Expressions {
         return d.isNone() ? "a plain number (or strain)" : "a " + d.name();
     }
 
-    static String kindOf(Value v) {
+    /** How an error message names what a value is: "a stress", "a rosette", ... */
+    public static String kindOf(Value v) {
         if (v instanceof Value.Number n) {
             return describe(n.dimension());
         }

@@ -4,9 +4,7 @@ import java.util.Map;
 import org.rosetra.lang.syntax.Declaration;
 import org.rosetra.lang.syntax.Field;
 import org.rosetra.lang.syntax.NameRef;
-import org.rosetra.lang.syntax.ReadingList;
 import org.rosetra.runtime.units.Dimension;
-import org.rosetra.runtime.units.UnitParser;
 
 /** The fields of one declaration block, read as SI numbers, names and lists. */
 final class Fields {

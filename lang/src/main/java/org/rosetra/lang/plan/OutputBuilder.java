@@ -4,11 +4,8 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import org.rosetra.lang.syntax.Call;
 import org.rosetra.lang.syntax.Display;
 import org.rosetra.lang.syntax.Expr;
-import org.rosetra.lang.syntax.Index;
-import org.rosetra.lang.syntax.Member;
 import org.rosetra.lang.syntax.NameRef;
 import org.rosetra.lang.syntax.Plot;
 import org.rosetra.lang.syntax.SourceSpan;
@@ -145,7 +142,7 @@ final class OutputBuilder {
         for (Expr item : items) {
             Value v = evaluation.expressions().evaluate(item, Map.of());
             Dimension d = Arithmetic.dimension(v, item.span());
-            Unit unit = d.isNone() ? (isStrain(item) ? display.strainUnit() : Unit.ONE) : display.unitFor(d);
+            Unit unit = d.isNone() ? (StrainExpressions.isStrain(item) ? display.strainUnit() : Unit.ONE) : display.unitFor(d);
             columns.add(new Column(textOf(item.span()), unit.symbol()));
             values.add(Arithmetic.column(v, n));
             units.add(unit);
@@ -168,21 +165,6 @@ final class OutputBuilder {
         items.clear();
     }
 
-    /** Whether a plain-number expression is a strain (shown in microstrain) rather than a ratio. */
-    private static boolean isStrain(Expr e) {
-        if (e instanceof Index ix) {
-            return isStrain(ix.target());
-        }
-        if (e instanceof Member m) {
-            return RosetteMember.byScriptName(m.member().text()).map(x -> x.kind() == MemberKind.STRAIN).orElse(false);
-        }
-        if (e instanceof Call c) {
-            String f = c.function().text();
-            return f.equals("strain_at") || f.equals("shear_at")
-                    || ((f.equals("max") || f.equals("min") || f.equals("abs")) && !c.args().isEmpty() && isStrain(c.args().get(0)));
-        }
-        return false;
-    }
 
     Unit unitOf(RosetteMember m) {
         return switch (m.kind()) {

@@ -9,7 +9,6 @@ import java.util.Map;
 import java.util.Set;
 import org.rosetra.lang.syntax.Call;
 import org.rosetra.lang.syntax.Check;
-import org.rosetra.lang.syntax.Expr;
 import org.rosetra.lang.syntax.Plot;
 import org.rosetra.runtime.chain.ChainBuffers;
 import org.rosetra.runtime.chain.ReductionChain;

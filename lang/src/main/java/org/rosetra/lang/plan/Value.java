@@ -8,6 +8,20 @@ import org.rosetra.runtime.units.Dimension;
 /** What an expression evaluates to. Numbers are SI; a NaN in a column means "no result here". */
 public sealed interface Value {
 
+    /** The dimension of a number, a column or a history; null for anything that is not numbers. */
+    default Dimension dimensionOrNull() {
+        if (this instanceof Number n) {
+            return n.dimension();
+        }
+        if (this instanceof Column c) {
+            return c.dimension();
+        }
+        if (this instanceof History h) {
+            return h.dimension();
+        }
+        return null;
+    }
+
     /** One number with its dimension. */
     record Number(double si, Dimension dimension) implements Value {}
 

@@ -5,10 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import org.rosetra.lang.plan.Value;
-import org.rosetra.lang.syntax.Call;
 import org.rosetra.lang.syntax.Expr;
-import org.rosetra.lang.syntax.Index;
-import org.rosetra.lang.syntax.Member;
 import org.rosetra.runtime.material.Material;
 import org.rosetra.runtime.render.table.Cell;
 import org.rosetra.runtime.render.table.Column;
@@ -16,8 +13,6 @@ import org.rosetra.runtime.render.table.ColumnFormat;
 import org.rosetra.runtime.render.table.PlainTextTable;
 import org.rosetra.runtime.render.table.ResultTable;
 import org.rosetra.runtime.render.table.Row;
-import org.rosetra.runtime.results.MemberKind;
-import org.rosetra.runtime.results.RosetteMember;
 import org.rosetra.runtime.units.Dimension;
 import org.rosetra.runtime.units.DisplayUnits;
 import org.rosetra.runtime.units.Unit;
@@ -68,7 +63,7 @@ final class ValueText {
 
     private Unit unitFor(Dimension d, Expr expression) {
         if (d.isNone()) {
-            return isStrain(expression) ? display.strainUnit() : Unit.ONE;
+            return org.rosetra.lang.plan.StrainExpressions.isStrain(expression) ? display.strainUnit() : Unit.ONE;
         }
         return display.unitFor(d);
     }
@@ -136,20 +131,4 @@ final class ValueText {
         }
     }
 
-    /** Whether a plain-number expression is a strain (shown in microstrain) rather than a ratio. */
-    static boolean isStrain(Expr e) {
-        if (e instanceof Index ix) {
-            return isStrain(ix.target());
-        }
-        if (e instanceof Member m) {
-            return RosetteMember.byScriptName(m.member().text()).map(x -> x.kind() == MemberKind.STRAIN).orElse(false);
-        }
-        if (e instanceof Call c) {
-            String f = c.function().text();
-            return f.equals("strain_at") || f.equals("shear_at")
-                    || ((f.equals("max") || f.equals("min") || f.equals("abs")) && !c.args().isEmpty()
-                    && isStrain(c.args().get(0)));
-        }
-        return false;
-    }
 }
