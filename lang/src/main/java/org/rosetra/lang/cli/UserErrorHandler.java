@@ -1,5 +1,6 @@
 package org.rosetra.lang.cli;
 
+import org.rosetra.lang.plan.ScriptRunner;
 import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
 
@@ -15,6 +16,6 @@ final class UserErrorHandler implements IExecutionExceptionHandler {
         if (System.getenv("ROSETRA_DEBUG") != null) {
             e.printStackTrace(line.getErr());
         }
-        return ExitStatus.ERROR;
+        return ScriptRunner.ERROR;
     }
 }

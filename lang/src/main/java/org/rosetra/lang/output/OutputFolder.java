@@ -1,9 +1,7 @@
 package org.rosetra.lang.output;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Map;
 import org.rosetra.runtime.render.record.CalculationRecord;
 import org.rosetra.runtime.render.record.RecordFolder;
@@ -22,18 +20,7 @@ public final class OutputFolder {
 
     /** Writes one file by a temporary name and a rename, so a reader never sees half of it. */
     public static void writeAtomically(Path file, byte[] bytes) throws IOException {
-        Path target = file.toAbsolutePath();
-        Files.createDirectories(target.getParent());
-        Path temp = Files.createTempFile(target.getParent(), ".rosetra-", ".part");
-        try {
-            Files.write(temp, bytes);
-            try {
-                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (java.nio.file.AtomicMoveNotSupportedException e) {
-                Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temp);
-        }
+        org.rosetra.runtime.render.output.OutputTransaction.writeOne(file, bytes);
     }
+
 }

@@ -23,8 +23,11 @@ import org.rosetra.runtime.render.table.PlainTextTable;
  * LANGUAGE.md: 0 ran and passed, 1 a check failed, 2 an error (nothing computed or written).
  */
 public final class ScriptRunner {
+    /** The script ran and every check passed (exit statuses of LANGUAGE.md, "Running and results"). */
     public static final int PASSED = 0;
+    /** The script ran and a check failed; every output is still written. */
     public static final int CHECK_FAILED = 1;
+    /** The script has an error and nothing was computed or written. */
     public static final int ERROR = 2;
 
     private final PrintStream out;

@@ -11,6 +11,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.rosetra.lang.check.Diagnostics;
+import org.rosetra.lang.check.ScriptChecker;
 
 import org.rosetra.lang.syntax.Baseline;
 import org.rosetra.lang.syntax.Case;
@@ -198,7 +199,7 @@ public final class Session {
      */
     public void check(Diagnostics diagnostics) {
         List<Statement> all = statements();
-        CheckerBridge.check(new Script("(session)", all), diagnostics);
+        ScriptChecker.check(new Script("(session)", all), diagnostics);
         if (diagnostics.hasErrors()) {
             return;
         }
@@ -232,7 +233,7 @@ public final class Session {
     public Outcome evaluate(Diagnostics diagnostics, java.util.function.Predicate<Statement> wanted, boolean everything) {
         List<Statement> all = statements();
         Script whole = new Script("(session)", all);
-        CheckerBridge.check(whole, diagnostics);
+        ScriptChecker.check(whole, diagnostics);
         if (diagnostics.hasErrors()) {
             return new Outcome(diagnostics, null, List.of(), List.of(), null, null);
         }

@@ -43,6 +43,23 @@ public final class OutputTransaction implements AutoCloseable {
     this.root = root;
   }
 
+  /**
+   * Writes one file on its own (such as a {@code --json} file) the same safe way: by a temporary
+   * name beside it and a rename, with the usual permissions of a new file. No manifest, nothing
+   * else in its folder touched.
+   */
+  public static void writeOne(Path file, byte[] bytes) throws IOException {
+    Path target = file.toAbsolutePath().normalize();
+    Files.createDirectories(target.getParent());
+    Path temp = createTemp(target);
+    try {
+      Files.write(temp, bytes);
+      move(temp, target);
+    } finally {
+      Files.deleteIfExists(temp);
+    }
+  }
+
   /** Starts a transaction on {@code dir}, creating it (and its parents) when missing. */
   public static OutputTransaction begin(Path dir) throws IOException {
     Path root = dir.toAbsolutePath().normalize();
@@ -219,7 +236,7 @@ public final class OutputTransaction implements AutoCloseable {
     }
   }
 
-  private void move(Path temp, Path target) throws IOException {
+  private static void move(Path temp, Path target) throws IOException {
     try {
       Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
     } catch (AtomicMoveNotSupportedException e) {
