@@ -59,15 +59,8 @@ public final class ScriptRunner {
         if (loaded == null) {
             return ERROR;
         }
-        loaded.session.allowJava(options.allowJava());
-        loaded.session.writesRecord(options.writeOutputs());
-        if (System.console() != null) {
-            loaded.session.progressTo(err);
-        }
-        Diagnostics diagnostics = new Diagnostics();
-        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
-        Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
-        if (report(diagnostics, loaded.session)) {
+        Outcome outcome = compute(loaded, options.allowJava(), options.writeOutputs());
+        if (outcome == null) {
             return ERROR;
         }
         for (Output o : outcome.outputs()) {
@@ -123,11 +116,8 @@ public final class ScriptRunner {
         if (loaded == null) {
             return ERROR;
         }
-        loaded.session.allowJava(allowJava);
-        Diagnostics diagnostics = new Diagnostics();
-        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
-        Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
-        if (report(diagnostics, loaded.session)) {
+        Outcome outcome = compute(loaded, allowJava, false);
+        if (outcome == null) {
             return ERROR;
         }
         Object now;
@@ -175,6 +165,22 @@ public final class ScriptRunner {
             s.append(String.format(Locale.ROOT, " at %.3f s", c.at()));
         }
         return s.toString();
+    }
+
+    /**
+     * Checks and computes a loaded script; prints its diagnostics. Null when it has an error.
+     * {@code writesRecord} false spares the digests of series files that only the record needs.
+     */
+    private Outcome compute(Loaded loaded, boolean allowJava, boolean writesRecord) {
+        loaded.session.allowJava(allowJava);
+        loaded.session.writesRecord(writesRecord);
+        if (System.console() != null) {
+            loaded.session.progressTo(err);
+        }
+        Diagnostics diagnostics = new Diagnostics();
+        loaded.session.submit("script", loaded.name, loaded.text, diagnostics);
+        Outcome outcome = diagnostics.hasErrors() ? null : loaded.session.evaluate(diagnostics);
+        return report(diagnostics, loaded.session) ? null : outcome;
     }
 
     /** Prints the diagnostics; true when there were errors. */
