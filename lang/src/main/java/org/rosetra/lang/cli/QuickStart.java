@@ -9,7 +9,7 @@ import org.rosetra.lang.plan.ScriptRunner;
  * The two commands a script's author and an editor hook run most, {@code run SCRIPT [--json
  * FILE] [--out DIR] [--allow-java] [--no-record]} and {@code check SCRIPT}, read without building picocli's
  * model of every command. picocli's classes are compiled for Java 5 and cannot be kept in the
- * class-data archive, so building that model is about a fifth of a cold run (bench/startup).
+ * class-data archive, so building that model cost about 85 ms of a cold run (bench/startup-phases).
  * Anything else, including every mistake and every request for help, goes to picocli, which
  * answers it as it always does: this path only ever takes command lines picocli would accept
  * with the same meaning.
