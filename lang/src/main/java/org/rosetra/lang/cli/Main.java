@@ -35,7 +35,7 @@ public final class Main implements Runnable {
         // "env": {"ROSETRA_ALLOW_JAVA": "1"} in its kernel.json).
         boolean kernelAllowsJava = "1".equals(System.getenv("ROSETRA_ALLOW_JAVA"));
         line.addSubcommand("kernel", new KernelCommand(() ->
-                SessionCellEngine.warmedUp(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version(), 1500)));
+                new SessionCellEngine(Path.of("").toAbsolutePath(), kernelAllowsJava, VersionProvider.version())));
         line.setExecutionExceptionHandler(new UserErrorHandler());
         return line.execute(args);
     }

@@ -41,35 +41,6 @@ public final class SessionCellEngine implements CellEngine {
         this.completer = new ScriptCompleter(session);
     }
 
-    /**
-     * An engine whose language code is already compiled by the JVM: a throwaway session runs
-     * small cells first (for at most {@code budgetMillis}), so a notebook's first cells are as
-     * quick as its later ones.
-     */
-    public static SessionCellEngine warmedUp(Path folder, boolean allowJava, String version, long budgetMillis) {
-        SessionCellEngine scratch = new SessionCellEngine(folder, false, version);
-        OutputSink nowhere = new OutputSink() {
-            @Override
-            public void display(MimeBundle bundle) {
-            }
-
-            @Override
-            public void printOut(String text) {
-            }
-
-            @Override
-            public void printErr(String text) {
-            }
-        };
-        long deadline = System.nanoTime() + budgetMillis * 1_000_000L;
-        for (int i = 0; i < 2000 && System.nanoTime() < deadline; i++) {
-            scratch.execute("let x = " + i + " MPa\nlet y = 2 * x", nowhere);
-            scratch.complete("let z = x", 9);
-            scratch.isComplete("material m {");
-        }
-        return new SessionCellEngine(folder, allowJava, version);
-    }
-
     @Override
     public CellOutcome execute(String code, OutputSink sink) {
         cancel.set(false);
