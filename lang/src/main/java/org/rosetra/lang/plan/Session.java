@@ -78,10 +78,6 @@ public final class Session {
         this.readOptions = options;
     }
 
-    public org.rosetra.runtime.series.ReadOptions readOptions() {
-        return readOptions;
-    }
-
     /** The text of a file or cell the session has seen, for diagnostics (null if unknown). */
     public String sourceOf(String file) {
         return sourceText.get(file);
@@ -152,18 +148,6 @@ public final class Session {
             }
         }
         return out.toString().strip();
-    }
-
-    /** Every name defined so far (declarations, readings, series, values), in order. */
-    public List<String> definedNames() {
-        List<String> names = new ArrayList<>();
-        for (Statement s : statements()) {
-            String key = key(s);
-            if (key != null && !key.startsWith("#")) {
-                names.add(key);
-            }
-        }
-        return names;
     }
 
     /** The statement that defines {@code name}, or null. */

@@ -111,11 +111,6 @@ public final class Columns {
         return best;
     }
 
-    /** True where the column has a value. */
-    public static boolean defined(double[] a, int i) {
-        return !Double.isNaN(a[i]);
-    }
-
     private static double[] unary(double[] a, DoubleUnaryOperator op, String what) {
         double[] out = new double[a.length];
         for (int i = 0; i < a.length; i++) {
