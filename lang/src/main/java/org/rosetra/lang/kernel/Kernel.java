@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.UUID;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
+import java.util.function.Supplier;
 import org.zeromq.SocketType;
 import org.zeromq.ZContext;
 import org.zeromq.ZMQ;
@@ -33,6 +34,7 @@ public final class Kernel {
     private ZContext context;
     private boolean closed;
     private boolean warmUp = true;
+    private Supplier<? extends CellEngine> warmUpEngines;
 
     public Kernel(ConnectionInfo connection, CellEngine engine, PrintStream log) {
         this.connection = connection;
@@ -45,6 +47,15 @@ public final class Kernel {
     /** Skips the warm-up before serving (tests, where start-up time matters more than speed). */
     public Kernel withoutWarmUp() {
         warmUp = false;
+        return this;
+    }
+
+    /**
+     * Warms up through a throwaway engine from {@code engines} (a fresh session, never the one
+     * served), so the language code is compiled too, not only the message path.
+     */
+    public Kernel warmingUpWith(Supplier<? extends CellEngine> engines) {
+        warmUpEngines = engines;
         return this;
     }
 
@@ -101,7 +112,7 @@ public final class Kernel {
         heartbeat.start(); // first, so a front end waiting for us sees a live kernel
         if (warmUp) {
             long started = System.nanoTime();
-            int cells = WarmUp.run();
+            int cells = warmUpEngines == null ? WarmUp.run() : WarmUp.run(warmUpEngines.get());
             log.println("rosetra kernel: warmed up with " + cells + " cells in "
                     + (System.nanoTime() - started) / 1_000_000 + " ms");
         }

@@ -60,7 +60,7 @@ public final class KernelCommand implements Callable<Integer> {
             System.err.println("rosetra kernel: cannot use connection file: " + e.getMessage());
             return 2;
         }
-        Kernel kernel = new Kernel(connection, engines.get(), System.err);
+        Kernel kernel = new Kernel(connection, engines.get(), System.err).warmingUpWith(engines);
         (noWarmUp ? kernel.withoutWarmUp() : kernel).run();
         return 0;
     }
