@@ -170,7 +170,13 @@ final class PartParser {
                     status = PART_DONE;
                     break;
                 }
-                int lineBreaks = parseRow(inChunk, line);
+                int lineBreaks;
+                if (plainRow(inChunk)) {
+                    lineBreaks = 1;
+                    rowWasBlank = false;
+                } else {
+                    lineBreaks = parseRow(inChunk, line);
+                }
                 if (lineBreaks == INCOMPLETE) {
                     status = NEEDS_DATA;
                     break;
@@ -266,6 +272,82 @@ final class PartParser {
         if (upTo > countedUpTo) {
             control.bytesRead(upTo - countedUpTo);
             countedUpTo = upTo;
+        }
+    }
+
+    /**
+     * The common row, parsed in one tight pass: every field a plain decimal (optional sign,
+     * digits, optional decimal mark and digits; at most 18 digits, as {@link #parseRow}'s own
+     * fast path takes them, so the value is the same), the row ending in a line break before
+     * the buffer's end. Anything else (quotes, spaces, exponents, text in a skipped column, a
+     * blank or short or long row, a row cut by the buffer's end) returns false with nothing
+     * moved, and {@link #parseRow} reads the row and reports what is wrong with it. On true,
+     * {@code pos} is past the row's line break.
+     */
+    private boolean plainRow(int r) {
+        final byte[] b = buffer;
+        final int lim = limit;
+        final byte delim = delimiter;
+        final byte mark = decimalMark;
+        final int[] fieldColumns = columnOfField;
+        final int last = fieldCount - 1;
+        int p = pos;
+        for (int f = 0; ; f++) {
+            int column = fieldColumns[f];
+            if (column < 0) {
+                return false; // a skipped column may hold anything: the general path reads it
+            }
+            if (p >= lim) {
+                return false;
+            }
+            byte c = b[p];
+            boolean negative = c == '-';
+            if (negative || c == '+') {
+                p++;
+            }
+            long mantissa = 0;
+            int start = p;
+            int d;
+            while (p < lim && (d = (b[p] - '0') & 0xFF) < 10) {
+                mantissa = mantissa * 10 + d;
+                p++;
+            }
+            int digits = p - start;
+            int fractionDigits = 0;
+            if (p < lim && b[p] == mark) {
+                int fractionStart = ++p;
+                while (p < lim && (d = (b[p] - '0') & 0xFF) < 10) {
+                    mantissa = mantissa * 10 + d;
+                    p++;
+                }
+                fractionDigits = p - fractionStart;
+                digits += fractionDigits;
+            }
+            if (p >= lim || digits == 0 || digits > 18 || mantissa > DecimalText.EXACT_INTEGER_LIMIT) {
+                return false;
+            }
+            double value = fractionDigits == 0 ? (double) mantissa
+                    : (double) mantissa / DecimalText.POWERS_OF_TEN[fractionDigits];
+            columns[column][r] = negative ? -value : value;
+            c = b[p];
+            if (f < last) {
+                if (c != delim) {
+                    return false;
+                }
+                p++;
+            } else {
+                if (c == '\r') {
+                    if (++p >= lim) {
+                        return false;
+                    }
+                    c = b[p];
+                }
+                if (c != '\n') {
+                    return false;
+                }
+                pos = p + 1;
+                return true;
+            }
         }
     }
 
