@@ -36,7 +36,7 @@ public record ReadOptions(int threads, int chunkRows, int bufferBytes, long minB
      */
     public static ReadOptions defaults() {
         return new ReadOptions(Math.min(2, Runtime.getRuntime().availableProcessors()), 8_192,
-                1 << 20, 4L << 20, new AtomicBoolean(), ProgressListener.NONE);
+                1 << 16, 4L << 20, new AtomicBoolean(), ProgressListener.NONE);
     }
 
     public ReadOptions withThreads(int n) {
