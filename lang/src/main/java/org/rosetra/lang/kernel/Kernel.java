@@ -131,6 +131,7 @@ public final class Kernel {
             if (poller.pollin(controlIndex)) {
                 running = onControl(Frames.receive(control, 0), controlOut, shellRequests,
                         languageVersion, implementationVersion);
+                controlOut.flush();
             }
             if (poller.pollin(stopIndex)) {
                 running = false;
@@ -149,6 +150,7 @@ public final class Kernel {
             log.println("rosetra kernel: a cell did not stop; leaving it behind");
         }
         heartbeat.stop();
+        iopub.stop();
         poller.close();
         log.println("rosetra kernel: shut down");
     }

@@ -12,6 +12,10 @@ interface MessageOut {
     /** Answers {@code request} on the socket it came from. */
     void reply(Request request, String type, JsonContent content);
 
+    /** Sends at once whatever is held back to be sent together (see {@link Publisher}). */
+    default void flush() {
+    }
+
     default void status(Request cause, String state) {
         publish(cause, "status", json -> json.writeStringField("execution_state", state));
     }

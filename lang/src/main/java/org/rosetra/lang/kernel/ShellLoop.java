@@ -51,6 +51,14 @@ final class ShellLoop implements Runnable {
     /** Answers one request; false after a shutdown request. */
     private boolean serve(List<byte[]> frames) {
         try {
+            return answerOrLog(frames);
+        } finally {
+            out.flush(); // the status idle, at the end of each request
+        }
+    }
+
+    private boolean answerOrLog(List<byte[]> frames) {
+        try {
             return answer(frames);
         } catch (RuntimeException e) {
             // A request the kernel cannot handle must not end the shell thread.

@@ -15,6 +15,12 @@ final class SocketOut implements MessageOut {
         this.iopub = iopub;
     }
 
+    /** Sends what is still held for IOPub. */
+    @Override
+    public void flush() {
+        iopub.flush();
+    }
+
     @Override
     public void publish(Request cause, String type, JsonContent content) {
         iopub.send(wire.encode(MessageOut.topic(type), type, cause.header(), content.toBytes()));
@@ -22,6 +28,7 @@ final class SocketOut implements MessageOut {
 
     @Override
     public void reply(Request request, String type, JsonContent content) {
+        iopub.flush(); // what the request published goes out before its reply
         Frames.send(replies, wire.encode(request.identities(), type, request.header(), content.toBytes()));
     }
 }

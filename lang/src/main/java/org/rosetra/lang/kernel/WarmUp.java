@@ -44,7 +44,8 @@ final class WarmUp {
             ZMQ.Socket listener = zmq.createSocket(SocketType.SUB);
             listener.subscribe(new byte[0]);
             listener.connect("tcp://127.0.0.1:" + iopubPort);
-            MessageOut out = new SocketOut(wire, kernelSide, new Publisher(iopub));
+            Publisher publisher = new Publisher(iopub);
+            MessageOut out = new SocketOut(wire, kernelSide, publisher);
             ZMQ.Poller poller = zmq.createPoller(1);
             poller.register(kernelSide, ZMQ.Poller.POLLIN);
 
@@ -58,6 +59,7 @@ final class WarmUp {
                 Request request = Kernel.decodeOrLog(wire, Frames.receive(kernelSide, 0), "warm-up", quiet);
                 if (request != null) {
                     requests.handle(request, out);
+                    out.flush();
                 }
                 Frames.receive(client, 0);
                 while (Frames.receive(listener, ZMQ.DONTWAIT) != null) {
@@ -66,6 +68,7 @@ final class WarmUp {
                 cells++;
             }
             poller.close();
+            publisher.stop();
             return cells;
         }
     }
