@@ -76,6 +76,28 @@ class SeriesReaderValuesTest {
         assertSameAsReference(text, ',', '.', ReadOptions.defaults().withChunkRows(chunkRows).withBufferBytes(97));
     }
 
+    /**
+     * Every column read, so most rows take the reader's tight pass for plain decimals; the
+     * rows it must leave to the general parser (exponents, more digits than a double holds
+     * exactly, a '+' sign, -0, rows cut by a read) are mixed in. Reference: Double.parseDouble.
+     */
+    @ParameterizedTest
+    @ValueSource(ints = {16, 61, 97, 4096, 1 << 16})
+    void everyColumnReadMatchesDoubleParseDoubleBitForBit(int bufferBytes) throws IOException {
+        for (String newline : List.of("\n", "\r\n")) {
+            String text = randomSeries(new Random(21), 3000, ',', '.', newline)
+                    .replaceAll(",run [0-9]", "").replace("t_s,g1,note,g2", "t_s,g1,g2");
+            Path file = write("all.csv", text);
+            SeriesSource source = new SeriesSource(file, "all.csv", ',', '.', "t_s", List.of("g2", "g1"));
+            Collected read = Collected.read(source, ReadOptions.defaults().withBufferBytes(bufferBytes));
+            double[][] expected = ReferenceCsv.columns(text, ',', '.', List.of("t_s", "g2", "g1"));
+            assertEquals(expected[0].length, read.rows);
+            for (int c = 0; c < expected.length; c++) {
+                assertArrayEquals(expected[c], read.columns[c], 0.0, "column " + c + " (reference: Double.parseDouble)");
+            }
+        }
+    }
+
     @Test
     void semicolonWithDecimalComma() throws IOException {
         String text = randomSeries(new Random(12), 2000, ';', ',', "\n");
