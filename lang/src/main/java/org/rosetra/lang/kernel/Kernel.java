@@ -105,8 +105,9 @@ public final class Kernel {
         String implementationVersion = KernelInfo.implementationVersion();
         ShellRequests shellRequests = new ShellRequests(engine, implementationVersion,
                 languageVersion, log);
+        StayAwake awake = new StayAwake();
         ShellLoop shellLoop = new ShellLoop(shell, wakeShell, zmq.createPoller(2), wire,
-                shellRequests, iopub, log, () -> signal(zmq, stopAddress));
+                shellRequests, iopub, log, () -> signal(zmq, stopAddress), awake);
         Thread shellThread = new Thread(shellLoop, "rosetra-shell");
         shellThread.setDaemon(true); // a cell that ignores an interrupt must not keep the JVM alive
         heartbeat.start(); // first, so a front end waiting for us sees a live kernel
@@ -116,6 +117,7 @@ public final class Kernel {
             log.println("rosetra kernel: warmed up with " + cells + " cells in "
                     + (System.nanoTime() - started) / 1_000_000 + " ms");
         }
+        awake.start();
         shellThread.start();
 
         MessageOut controlOut = new SocketOut(wire, control, iopub);
@@ -151,6 +153,7 @@ public final class Kernel {
         }
         heartbeat.stop();
         iopub.stop();
+        awake.stop();
         poller.close();
         log.println("rosetra kernel: shut down");
     }

@@ -18,10 +18,12 @@ final class ShellLoop implements Runnable {
     private final MessageOut out;
     private final PrintStream log;
     private final Runnable onShutdownRequest;
+    private final StayAwake awake;
 
     /** All sockets given here are handed over to the shell thread. */
     ShellLoop(ZMQ.Socket shell, ZMQ.Socket wake, ZMQ.Poller poller, WireFormat wire,
-            ShellRequests requests, Publisher iopub, PrintStream log, Runnable onShutdownRequest) {
+            ShellRequests requests, Publisher iopub, PrintStream log, Runnable onShutdownRequest,
+            StayAwake awake) {
         this.shell = shell;
         this.wake = wake;
         this.poller = poller;
@@ -30,6 +32,7 @@ final class ShellLoop implements Runnable {
         this.out = new SocketOut(wire, shell, iopub);
         this.log = log;
         this.onShutdownRequest = onShutdownRequest;
+        this.awake = awake;
     }
 
     @Override
@@ -50,10 +53,12 @@ final class ShellLoop implements Runnable {
 
     /** Answers one request; false after a shutdown request. */
     private boolean serve(List<byte[]> frames) {
+        awake.begin();
         try {
             return answerOrLog(frames);
         } finally {
             out.flush(); // the status idle, at the end of each request
+            awake.end();
         }
     }
 
