@@ -20,7 +20,7 @@ import org.zeromq.ZMQException;
  * {@link #flush}. Order is kept.
  */
 final class Publisher {
-    static final long HOLD_MICROS = Long.getLong("rosetra.kernel.holdMicros", 2000);
+    static final long HOLD_MICROS = 2000;
 
     private final ZMQ.Socket iopub;
     private final List<List<byte[]>> held = new ArrayList<>();
@@ -38,7 +38,7 @@ final class Publisher {
 
     /** Sends {@code frames} within {@link #HOLD_MICROS} µs, after everything held before it. */
     synchronized void send(List<byte[]> frames) {
-        if (stopped || HOLD_MICROS <= 0) {
+        if (stopped) {
             flush();
             Frames.send(iopub, frames);
             return;
