@@ -15,9 +15,9 @@ import org.zeromq.ZMQException;
  *
  * <p>Messages are held for at most {@link #HOLD_MICROS} µs and sent together: each send
  * wakes ZeroMQ's I/O thread, and on a shared machine every wake-up can wait for a processor,
- * so a trivial cell's five messages cost one wake-up instead of five. A long cell's output
- * still streams: whatever is held goes out when the hold ends, before a reply, or on
- * {@link #flush}. Order is kept.
+ * so a trivial cell's five messages leave in one or two bursts instead of five sends. A long
+ * cell's output still streams: whatever is held goes out when the hold ends, before a reply,
+ * or on {@link #flush}. Order is kept.
  */
 final class Publisher {
     static final long HOLD_MICROS = 2000;
