@@ -13,7 +13,8 @@ import org.zeromq.ZMQ;
  * into a throwaway engine, before the kernel reports ready. The JVM compiles hot code only
  * after it has run many times; without this the first few hundred cells of a notebook each
  * cost a millisecond or more extra (bench/kernel-roundtrip's cells taken 100 at a time, with
- * the optimising compiler on: medians 3.1-4.3 ms for the first 300, 2.2-2.5 ms for the last 400 of 1500). Nothing reaches a front end or the user's session.
+ * the optimising compiler on: medians 3.1-4.3 ms for the first 300, 2.2-2.5 ms for the last
+ * 400 of 1500). Nothing reaches a front end or the user's session.
  */
 final class WarmUp {
     private static final int CELLS = 1500;
